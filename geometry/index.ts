@@ -14,7 +14,7 @@ export { cornerAngle, dist2, doubleArea } from './base/vec.js';
 export type { TriMesh, ConnectivityReport } from './mesh/tri-mesh.js';
 export {
   buildTriMesh, faceOf, next, prev, tailVertex, tipVertex, isBoundary, rotateCCW, outgoingHalfEdges,
-  eulerCharacteristic,
+  eulerCharacteristic, validateConnectivity,
 } from './mesh/tri-mesh.js';
 
 // --- io ---

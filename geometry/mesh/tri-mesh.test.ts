@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { buildTriMesh, eulerCharacteristic, outgoingHalfEdges, tipVertex } from './tri-mesh.js';
+import { buildTriMesh, eulerCharacteristic, outgoingHalfEdges, tipVertex, validateConnectivity } from './tri-mesh.js';
 import { torusGrid } from '../surfaces/torus.js';
 
 describe('directed-edge mesh', () => {
@@ -10,6 +10,7 @@ describe('directed-edge mesh', () => {
     expect(report.duplicated).toEqual([]);
     expect(report.nonManifold).toEqual([]);
     expect(eulerCharacteristic(mesh)).toBe(0);
+    expect(validateConnectivity(mesh)).toBeNull();
     for (let h = 0; h < 3 * mesh.nF; h++) expect(mesh.heTwin[mesh.heTwin[h]]).toBe(h);
   });
 

@@ -110,3 +110,25 @@ export function eulerCharacteristic(m: TriMesh): number {
   for (let v = 0; v < m.nV; v++) if (m.vertHe[v] >= 0) used++;
   return used - (3 * m.nF) / 2 + m.nF;
 }
+
+/**
+ * Checks the mesh's internal invariants (not user input): twins are mutual and opposite, every vertex
+ * handle leaves its vertex, faces use valid distinct vertices. Returns the first broken invariant, or null.
+ * Every mesh-mutation test ends with it. O(V + F).
+ */
+export function validateConnectivity(m: TriMesh): string | null {
+  for (let h = 0; h < 3 * m.nF; h++) {
+    const a = m.heVert[h];
+    if (a < 0 || a >= m.nV) return `half-edge ${h} starts at missing vertex ${a}`;
+    if (a === m.heVert[next(h)]) return `face ${faceOf(h)} repeats vertex ${a}`;
+    const t = m.heTwin[h];
+    if (t < 0) continue;
+    if (t >= 3 * m.nF || m.heTwin[t] !== h) return `twin of half-edge ${h} is not mutual`;
+    if (m.heVert[t] !== m.heVert[next(h)] || m.heVert[next(t)] !== a) return `twin of half-edge ${h} is not opposite`;
+  }
+  for (let v = 0; v < m.nV; v++) {
+    const h = m.vertHe[v];
+    if (h >= 3 * m.nF || (h >= 0 && m.heVert[h] !== v)) return `vertex ${v} has a handle that does not leave it`;
+  }
+  return null;
+}
