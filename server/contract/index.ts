@@ -66,3 +66,35 @@ export {
 } from './workspaces.js';
 export { HEALTH_PATH, healthResponseSchema, type HealthResponse } from './health.js';
 // --- diagrams (lab-server helper adds its exports here) ---
+export {
+  DIAGRAM_PATHS, SHARE_CLIENT_PATH, MAX_UPLOAD_BYTES, MAX_GENERATOR_PAGE, MESH_CONTENT_TYPE, INVALID_FILE_STATUS,
+  curveFamilySchema, basepointKindSchema, curveRefSchema, basepointRefSchema, surfacePointSchema, personSchema,
+  analysisStatusSchema, exportFormatSchema, templateSpecSchema, editOperationSchema, revisionOperationSchema,
+  diagramSummarySchema, diagramListResponseSchema, diagramSchema, diagramResponseSchema, createDiagramRequestSchema,
+  uploadDiagramFieldsSchema, uploadDiagramResponseSchema, fileProblemSchema, invalidFileErrorSchema,
+  updateDiagramRequestSchema, duplicateDiagramRequestSchema, revisionSchema, revisionListResponseSchema,
+  editRequestSchema, revisionResponseSchema, invalidOperationErrorSchema, restoreRequestSchema, surfaceStatsSchema,
+  analysisCurveSchema, analysisBasepointSchema, intersectionSchema, regionSchema, periodicDomainSchema,
+  gradingRankSchema, spincHomologySchema, floerSummarySchema, analysisResultSchema, analysisResponseSchema,
+  generatorsQuerySchema, generatorSchema, generatorsPageResponseSchema, domainCoefficientsSchema,
+  domainCheckRequestSchema, domainCheckResponseSchema, savedDomainSchema, savedDomainListResponseSchema,
+  createDomainRequestSchema, savedDomainResponseSchema, shareLinkSchema, shareLinkListResponseSchema,
+  createShareLinkResponseSchema, publicShareResponseSchema,
+  type CurveFamilyName, type CurveRef, type BasepointRef, type SurfacePoint, type Person, type AnalysisStatus,
+  type ExportFormat, type TemplateSpec, type TemplateKind, type EditOperation, type EditOperationType,
+  type RevisionOperation, type DiagramSummary, type DiagramListResponse, type Diagram, type DiagramResponse,
+  type CreateDiagramRequest, type UploadDiagramFields, type UploadDiagramResponse, type FileProblem,
+  type InvalidFileError, type UpdateDiagramRequest, type DuplicateDiagramRequest, type Revision,
+  type RevisionListResponse, type EditRequest, type RevisionResponse, type RestoreRequest, type SurfaceStats,
+  type Intersection, type Region, type PeriodicDomain, type FloerSummary, type AnalysisResult,
+  type AnalysisResponse, type GeneratorsQuery, type Generator, type GeneratorsPageResponse,
+  type DomainCoefficients, type DomainCheckRequest, type DomainCheckResponse, type SavedDomain,
+  type SavedDomainListResponse, type CreateDomainRequest, type SavedDomainResponse, type ShareLink,
+  type ShareLinkListResponse, type CreateShareLinkResponse, type PublicShareResponse, type EditRequestInput,
+  type EditOperationInput,
+} from './diagrams.js';
+export {
+  MESH_MAGIC, MeshBinaryError, meshBinaryByteLength, encodeMeshBinary, decodeMeshBinary,
+  encodeInt32Base64, decodeInt32Base64, encodeFloat32Base64, decodeFloat32Base64,
+  type MeshBinary, type MeshBinaryCurve, type MeshBinaryBasepoint,
+} from './mesh-binary.js';
