@@ -434,7 +434,10 @@ export const generatorSchema = z.object({
   index: z.number().int(),
   /** Intersection ids, one per alpha curve (alpha_1 first). */
   points: z.array(z.number().int()),
-  spinc: z.string(),
+  /** sign(σ) · Π local signs (its contribution to χ). */
+  sign: z.union([z.literal(1), z.literal(-1)]),
+  /** Name of its spin^c class; null when not computed. */
+  spinc: z.string().nullable(),
   /** Relative grading within its spin^c class; null when not defined (e.g. no domain connects). */
   grading: z.number().int().nullable(),
 });
@@ -460,23 +463,31 @@ export const domainCheckRequestSchema = z.object({
 });
 export type DomainCheckRequest = z.infer<typeof domainCheckRequestSchema>;
 
-/** The report of a domain check. Fractions are exact in binary (multiples of 1/4). */
+/** The report of a domain check (Ozsváth–Szabó 2004 §2.4; Lipshitz 2006 §4). Rationals are exact text ("1/2"). */
 export const domainCheckResponseSchema = z.object({
-  /** True when ∂D fits the from/to generators (or, without them, some pair of generators). */
+  /** True when ∂D fits generators x → y (the given from/to, or ones its corners determine). */
   isDomain: z.boolean(),
-  /** Why not, when isDomain is false. */
+  /** Why not, or why x and y are not determined; null when all is well. */
   reason: z.string().nullable(),
+  /** Generators as intersection ids by alpha, when known. */
   from: z.array(z.number().int()).nullable(),
   to: z.array(z.number().int()).nullable(),
-  /** Periodic: ∂D is a combination of whole curves. */
+  /** Curves whose generator points the boundary does not determine (give from/to). */
+  undetermined: z.object({ alphas: z.array(z.number().int()), betas: z.array(z.number().int()) }).nullable(),
+  /** Corner multiplicity J(D) per intersection id. */
+  corners: z.array(z.number().int()),
+  /** Periodic: no corners, ∂D is a combination of whole curves. */
   periodic: z.boolean(),
-  eulerMeasure: z.number(),
-  nx: z.number().nullable(),
-  ny: z.number().nullable(),
+  eulerMeasure: z.string(),
+  /** Σ a_R · (Gauss–Bonnet Euler measure of R), when available. */
+  geometricEulerMeasure: z.number().nullable(),
+  nx: z.string().nullable(),
+  ny: z.string().nullable(),
   /** n at each basepoint, in basepoint order. */
-  nBasepoints: z.array(z.object({ name: z.string(), n: z.number() })),
-  /** Maslov index μ = e + n_x + n_y (Lipshitz 2006), when from/to are known. */
-  maslovIndex: z.number().nullable(),
+  nBasepoints: z.array(z.object({ name: z.string(), n: z.number().int() })),
+  /** Maslov index μ = e + n_x + n_y (Lipshitz 2006), when x and y are known. */
+  maslovIndex: z.string().nullable(),
+  /** All coefficients ≥ 0. */
   positive: z.boolean(),
 });
 export type DomainCheckResponse = z.infer<typeof domainCheckResponseSchema>;
