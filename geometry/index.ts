@@ -26,8 +26,27 @@ export { torusGrid, torusGridVertex } from './surfaces/torus.js';
 // --- diagram ---
 export type { CurveFamily, DiagramCurve, BasepointKind, Basepoint, HeegaardDiagram } from './diagram/types.js';
 export { vertexLabel, curveName } from './diagram/types.js';
+export type { CurveLabels } from './diagram/curve-edges.js';
+export { labelCurveEdges, findHalfEdge } from './diagram/curve-edges.js';
+export type { FaceComponents } from './diagram/face-components.js';
+export { faceComponents } from './diagram/face-components.js';
+export type { CurveCheck } from './diagram/validate.js';
+export { validateCurves, checkCurves } from './diagram/validate.js';
+export type { Wedges } from './diagram/wedges.js';
+export { computeWedges } from './diagram/wedges.js';
+export type { IntersectionPoint } from './diagram/points.js';
+export type { RegionInfo, RegionCorner } from './diagram/region-info.js';
+export type { DiagramAnalysis } from './diagram/analyze.js';
+export { analyzeDiagram, EULER_MEASURE_TOLERANCE } from './diagram/analyze.js';
+export { toCombinatorial } from './diagram/combinatorial.js';
+export type { GridPath, GridTorusDiagramSpec } from './diagram/grid-torus-diagram.js';
+export { gridTorusDiagram, gridMeridian, gridParallel, gridDiagonal, lensSpaceDiagram } from './diagram/grid-torus-diagram.js';
 
 // --- curvature ---
+export type { MeshAngles } from './curvature/angles.js';
+export { meshAngles, angleDefects } from './curvature/angles.js';
+export type { RegionCurvature, WedgeShares } from './curvature/gauss-bonnet.js';
+export { regionCurvature, wedgeShares, smoothRegionCurvature } from './curvature/gauss-bonnet.js';
 
 // --- algebra ---
 
