@@ -16,12 +16,23 @@ export {
   buildTriMesh, faceOf, next, prev, tailVertex, tipVertex, isBoundary, rotateCCW, outgoingHalfEdges,
   eulerCharacteristic, validateConnectivity,
 } from './mesh/tri-mesh.js';
+export type { SurfaceStats } from './mesh/validate.js';
+export { validateSurface, surfaceStats, isWarning, SURFACE_WARNING_CODES } from './mesh/validate.js';
 
 // --- io ---
+export type { MeshFile, CurveEdges, BasepointMark } from './io/mesh-file.js';
+export { mergePositions } from './io/mesh-file.js';
+export type { ParsedDiagramFile } from './io/diagram-file.js';
+export { parseDiagramFile, diagramFromMeshFile, DIAGRAM_FILE_EXTENSIONS } from './io/diagram-file.js';
+export { assembleCurves, assembleBasepoints } from './io/assemble-curves.js';
+export { readObj, writeObj } from './io/obj.js';
+export { readOff, writeOff } from './io/off.js';
+export { readStl, writeStl } from './io/stl.js';
 
 // --- surfaces ---
 export type { TorusGridOptions } from './surfaces/torus.js';
 export { torusGrid, torusGridVertex } from './surfaces/torus.js';
+export { sphereMesh } from './surfaces/sphere.js';
 
 // --- diagram ---
 export type { CurveFamily, DiagramCurve, BasepointKind, Basepoint, HeegaardDiagram } from './diagram/types.js';
