@@ -1,0 +1,16 @@
+import { useState } from 'react';
+import { QueryClientProvider } from '@tanstack/react-query';
+import { RouterProvider } from 'react-router-dom';
+import { createQueryClient } from '../lib/query-client';
+import { createAppRouter } from './router';
+
+/** The whole client: one QueryClient and the router. */
+export function App() {
+  const [queryClient] = useState(createQueryClient);
+  const [router] = useState(createAppRouter);
+  return (
+    <QueryClientProvider client={queryClient}>
+      <RouterProvider router={router} />
+    </QueryClientProvider>
+  );
+}
