@@ -65,3 +65,9 @@ export { regionCurvature, wedgeShares, smoothRegionCurvature } from './curvature
 export type { CombinatorialPoint, CombinatorialRegion, CombinatorialDiagram } from './floer/combinatorics.js';
 
 // --- construct ---
+export type { EditMesh } from './mesh/edit.js';
+export { toEditMesh, ensureCapacity, compactMesh, splitEdge, splitFace, setEdgeLabel } from './mesh/edit.js';
+export type { TemplateSpec } from './construct/templates.js';
+export { buildTemplate } from './construct/templates.js';
+export { lensDiagram, torusCurveDiagram, gridDiagram, s1xs2TorusDiagram } from './construct/torus-templates.js';
+export { genusS3Diagram, genusS1xS2Diagram } from './construct/genus-templates.js';

@@ -8,6 +8,7 @@ import { fail, ok, type Problem, type Result } from '../base/result.js';
 import { findHalfEdge, setEdgeLabel, toEditMesh, compactMesh, type EditMesh } from '../mesh/edit.js';
 import { next, prev, validateConnectivity, type TriMesh } from '../mesh/tri-mesh.js';
 import { curveName, vertexLabel, type Basepoint, type CurveFamily, type HeegaardDiagram } from '../diagram/types.js';
+import { validateCurves } from '../diagram/validate.js';
 
 /** A diagram being edited: labels on a growable mesh. curves[c] is the curve with label c + 1. */
 export interface Workspace {
@@ -116,11 +117,15 @@ function walkCurve(em: EditMesh, id: number, startVertex: number): Int32Array | 
   return null;
 }
 
+/** `partial`: accept a diagram still being drawn (unequal curve counts, basepoint placement not final). */
+export interface CloseOptions { partial?: boolean }
+const PARTIAL_OK = new Set(['curve-count', 'too-few-curves', 'family-does-not-cut', 'piece-without-basepoint', 'piece-with-several-basepoints']);
+
 /**
  * Reads a workspace back into a new HeegaardDiagram after checking connectivity and every curve
  * invariant; refusals name the curve and vertex (user numbering). O(V x degree + F).
  */
-export function closeDiagram(ws: Workspace): Result<HeegaardDiagram> {
+export function closeDiagram(ws: Workspace, options: CloseOptions = {}): Result<HeegaardDiagram> {
   const { em } = ws;
   const conn = validateConnectivity(em);
   if (conn) return fail(problem('internal-mesh', `the edited mesh is broken (${conn}); this is a bug in Quadrant`));
@@ -151,7 +156,8 @@ export function closeDiagram(ws: Workspace): Result<HeegaardDiagram> {
     for (let v = 0; v < em.nV; v++) L[v] = wsLabel(ws, v);
     d.vertexLabels = L;
   }
-  return ok(d);
+  const problems = validateCurves(d).filter((p) => !(options.partial && PARTIAL_OK.has(p.code)));
+  return problems.length ? fail(...problems) : ok(d);
 }
 
 /** Builds a workspace from raw geometry and vertex-cycle curves (templates). */
