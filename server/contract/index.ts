@@ -65,6 +65,7 @@ export {
   type AcceptInvitationResponse,
 } from './workspaces.js';
 export { HEALTH_PATH, healthResponseSchema, type HealthResponse } from './health.js';
+export { DEV_MAIL_PATH, devMailResponseSchema, type DevMailResponse } from './dev.js';
 // --- diagrams (lab-server helper adds its exports here) ---
 export {
   DIAGRAM_PATHS, SHARE_CLIENT_PATH, MAX_UPLOAD_BYTES, MAX_GENERATOR_PAGE, MESH_CONTENT_TYPE, INVALID_FILE_STATUS,
