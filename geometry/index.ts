@@ -33,6 +33,10 @@ export { readStl, writeStl } from './io/stl.js';
 export type { TorusGridOptions } from './surfaces/torus.js';
 export { torusGrid, torusGridVertex } from './surfaces/torus.js';
 export { sphereMesh } from './surfaces/sphere.js';
+export type { GenusSurfaceOptions, GeneratedSurface } from './surfaces/genus.js';
+export { genusSurface, voxelSlabCage } from './surfaces/genus.js';
+export type { QuadMesh } from './surfaces/catmull-clark.js';
+export { catmullClark, triangulateQuads } from './surfaces/catmull-clark.js';
 
 // --- diagram ---
 export type { CurveFamily, DiagramCurve, BasepointKind, Basepoint, HeegaardDiagram } from './diagram/types.js';
