@@ -18,6 +18,8 @@ export interface CombinatorialPoint {
   sign: 1 | -1;
   /** Region ids in the quadrants NE, NW, SW, SE. A region may occupy several quadrants of one point. */
   quadrants: [number, number, number, number];
+  /** Optional: the vertex number a user sees (file numbering); absent means vertex + 1. */
+  label?: number;
 }
 
 export interface CombinatorialRegion {
@@ -30,6 +32,8 @@ export interface CombinatorialRegion {
   eulerQuarters: number;
   /** Indices into CombinatorialDiagram.basepoints of the basepoints inside the region. */
   basepoints: number[];
+  /** Optional: the Euler measure measured on the surface (discrete Gauss–Bonnet), when a mesh backs the diagram. */
+  geometricEuler?: number;
 }
 
 export interface CombinatorialDiagram {

@@ -1,0 +1,88 @@
+/**
+ * One entry point for the lab and the CLI: generator count, H_1(Y), periodic domains, weak admissibility,
+ * niceness and, for nice admissible diagrams of sane size, HF-hat with its spin^c splitting and relative
+ * gradings. Each part cites its source in its own file.
+ */
+import { nonNegativePeriodic } from './admissibility.js';
+import type { CombinatorialDiagram } from './combinatorics.js';
+import { countGenerators } from './generators.js';
+import { hfHatNice, type SpincHomology } from './hf-hat.js';
+import { firstHomology, type H1Summary } from './homology-h1.js';
+import { blockedRegions, domainLattice, type BlockedBasepoints, type DomainLattice } from './lattice.js';
+import { isNice, type NotNiceRegion } from './nice-moves.js';
+
+export interface FloerSummaryOptions {
+  /** Refuse to enumerate more generators than this (default 2,000,000). */
+  generatorLimit?: number;
+  /** Basepoints a domain must avoid: 'z' (HF-hat, default) or 'all' (tilde complexes of grids). */
+  blocked?: BlockedBasepoints;
+  /** Fraction done, for long runs. */
+  onProgress?: (fraction: number) => void;
+  /** Skip the chain complex (everything else is cheap). */
+  skipHomology?: boolean;
+}
+
+export interface FloerSummary {
+  /** Number of generators (perm N, Ryser 1963) as a decimal string; null when k is too large to count. */
+  generators: string | null;
+  h1: H1Summary;
+  /** Number of independent periodic domains (rank of the periodic lattice, b_1 for k = g). */
+  periodicDomains: number;
+  /** null when undecided (elimination too large). */
+  weaklyAdmissible: boolean | null;
+  /** A non-zero periodic domain with all coefficients of one sign (one integer per region). */
+  offendingPeriodicDomain?: number[];
+  nice: boolean;
+  notNiceRegions?: NotNiceRegion[];
+  hfHat: { rank: number; rawRank: number; bySpinc: SpincHomology[] } | null;
+  hfHatReason?: string;
+}
+
+/** Checks that make HF-hat meaningful for this diagram, else the reason in words. */
+function hfHatObstacle(comb: CombinatorialDiagram, count: bigint | null, limit: number, admissible: boolean | null, nice: boolean, lattice: DomainLattice | null): string | null {
+  const k = comb.curveCount, g = comb.genus;
+  const zs = comb.basepoints.filter((b) => b.kind === 'z').length || comb.basepoints.length;
+  if (zs !== k - g + 1) return `a diagram with ${k} alpha curves on a genus ${g} surface needs ${k - g + 1} basepoints, this one has ${zs}`;
+  if (!lattice) return 'the domain lattice is too large for exact arithmetic in this build';
+  if (admissible === false) return 'the diagram is not weakly admissible (a periodic domain has coefficients of one sign), so HF-hat is not defined from it';
+  if (admissible === null) return 'weak admissibility could not be decided (too many periodic domains)';
+  if (!nice) return 'the diagram is not nice (Sarkar–Wang 2010): some region without a basepoint is not a bigon or a square';
+  if (count === null) return 'too many curves to count generators';
+  if (count > BigInt(limit)) return `${count} generators exceed the limit of ${limit}`;
+  return null;
+}
+
+/** Everything Quadrant computes about a diagram's Floer side. Cost: dominated by HF-hat, O(#generators · k^2). */
+export function floerSummary(comb: CombinatorialDiagram, options: FloerSummaryOptions = {}): FloerSummary {
+  const limit = options.generatorLimit ?? 2_000_000;
+  const blocked = options.blocked ?? 'z';
+  const count = countGenerators(comb);
+  const h1 = firstHomology(comb);
+  let lattice: DomainLattice | null = null;
+  try { lattice = domainLattice(comb, blocked); } catch (e) { if (!(e instanceof RangeError)) throw e; }
+  const periodicDomains = lattice ? lattice.periodic.length : 0;
+  let weaklyAdmissible: boolean | null = null;
+  let offending: number[] | undefined;
+  if (lattice) {
+    const w = nonNegativePeriodic(lattice.periodic);
+    weaklyAdmissible = w === 'undecided' ? null : w === null;
+    if (w instanceof Int32Array) offending = Array.from(w);
+  }
+  const niceR = isNice(comb, blockedRegions(comb, blocked));
+  const out: FloerSummary = {
+    generators: count === null ? null : count.toString(), h1, periodicDomains, weaklyAdmissible,
+    nice: niceR.nice, hfHat: null,
+  };
+  if (offending) out.offendingPeriodicDomain = offending;
+  if (!niceR.nice) out.notNiceRegions = niceR.notNiceRegions;
+  const obstacle = options.skipHomology ? 'not requested' : hfHatObstacle(comb, count, limit, weaklyAdmissible, niceR.nice, lattice);
+  if (obstacle) { out.hfHatReason = obstacle; return out; }
+  try {
+    const r = hfHatNice(comb, Number(count), { blocked, onProgress: options.onProgress, lattice: lattice! });
+    out.hfHat = { rank: r.rank, rawRank: r.rawRank, bySpinc: r.bySpinc };
+  } catch (e) {
+    if (!(e instanceof RangeError)) throw e;
+    out.hfHatReason = `exact arithmetic outgrew this build: ${e.message}`;
+  }
+  return out;
+}
