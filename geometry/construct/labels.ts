@@ -164,3 +164,9 @@ export function closeDiagram(ws: Workspace, options: CloseOptions = {}): Result<
 export function workspaceFrom(mesh: TriMesh, curves: { family: CurveFamily; index: number; vertices: ArrayLike<number> }[], basepoints: Basepoint[]): Result<Workspace> {
   return openDiagram({ mesh, curves: curves.map((c) => ({ ...c, vertices: Int32Array.from(c.vertices) })), basepoints });
 }
+
+/** Full check of a diagram built outside a workspace (connectivity, curve invariants, validateCurves). */
+export function checkDiagram(d: HeegaardDiagram, options: CloseOptions = {}): Result<HeegaardDiagram> {
+  const ws = openDiagram(d);
+  return ws.ok ? closeDiagram(ws.value, options) : ws;
+}
