@@ -64,9 +64,34 @@ export type { RegionCurvature, WedgeShares } from './curvature/gauss-bonnet.js';
 export { regionCurvature, wedgeShares, smoothRegionCurvature } from './curvature/gauss-bonnet.js';
 
 // --- algebra ---
+export type { IntMatrix, SmithForm, HermiteForm } from './algebra/integer-matrix.js';
+export { smithNormalForm, hermiteNormalForm, integerKernel, toIntMatrix, matMul } from './algebra/integer-matrix.js';
+export type { SparseF2 } from './algebra/f2.js';
+export { rankF2, rankF2Dense, sparseF2FromPairs } from './algebra/f2.js';
 
 // --- floer ---
 export type { CombinatorialPoint, CombinatorialRegion, CombinatorialDiagram } from './floer/combinatorics.js';
+export type { GeneratorEntry, GeneratorPage, CurveIncidence } from './floer/generators.js';
+export { countGenerators, permanent, forEachGenerator, generators, generatorsPage, generatorSign, curveIncidence } from './floer/generators.js';
+export { cornerMap, pointQuarters, eulerQuarters as domainEulerQuarters, maslovQuarters, quartersText, pointName } from './floer/domains.js';
+export type { DomainCheck, DomainEnds } from './floer/check-domain.js';
+export { checkDomain } from './floer/check-domain.js';
+export type { DomainLattice, BlockedBasepoints } from './floer/lattice.js';
+export { domainLattice, domainBetween, classInvariant } from './floer/lattice.js';
+export { nonNegativePeriodic } from './floer/admissibility.js';
+export type { H1Summary } from './floer/homology-h1.js';
+export { firstHomology, cokernel } from './floer/homology-h1.js';
+export type { NotNiceRegion } from './floer/nice-moves.js';
+export { isNice } from './floer/nice-moves.js';
+export type { SpincHomology, HfHatResult, HfHatOptions } from './floer/hf-hat.js';
+export { hfHatNice } from './floer/hf-hat.js';
+export type { FloerSummary, FloerSummaryOptions } from './floer/summary.js';
+export { floerSummary } from './floer/summary.js';
+export type { GridMarking } from './floer/model-diagrams.js';
+export {
+  combinatorialGrid, combinatorialGridS3, combinatorialKnotGrid, combinatorialLensSpace, combinatorialS1xS2,
+  combinatorialDisjointCircles,
+} from './floer/model-diagrams.js';
 
 // --- construct ---
 export type { EditMesh } from './mesh/edit.js';

@@ -109,8 +109,8 @@ export interface SpincHomology {
   generators: number;
   /** Rank of the complex's homology (HF-hat ⊗ V^{k-g} when multi-pointed). */
   rawRank: number;
-  /** rawRank / 2^{k-g}. */
-  rank: number;
+  /** rawRank / 2^{k-g} when that is an integer; null otherwise (e.g. knot grids, where V shifts the class). */
+  rank: number | null;
   /** 0 for an integer (torsion) grading; otherwise gradings are mod this number. */
   gradingModulus: number;
   /** Raw ranks by relative grading (gr(root) = 0), non-zero entries only, ascending. */
@@ -192,6 +192,6 @@ function blockHomology(n: number, E: EdgeList, CG: ClassesAndGradings, extra: nu
       if (h > 0) byGrading.push({ grading: gr, rawRank: h });
       raw += h;
     }
-    return { spinc: c, root, generators: gens, rawRank: raw, rank: raw / 2 ** extra, gradingModulus: CG.modulus[c], byGrading };
+    return { spinc: c, root, generators: gens, rawRank: raw, rank: raw % 2 ** extra === 0 ? raw / 2 ** extra : null, gradingModulus: CG.modulus[c], byGrading };
   });
 }

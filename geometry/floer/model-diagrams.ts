@@ -19,7 +19,7 @@ export interface GridMarking { col: number; row: number; kind: 'z' | 'w' }
  * the vertical circle x = j (north), point (j, i) = alpha_i ∩ beta_j with sign +1, region r*n + c the square
  * [c, c+1] x [r, r+1]. Markings become basepoints in their squares, in the given order.
  */
-export function gridDiagram(n: number, markings: GridMarking[]): CombinatorialDiagram {
+export function combinatorialGrid(n: number, markings: GridMarking[]): CombinatorialDiagram {
   const sq = (c: number, r: number) => mod(r, n) * n + mod(c, n);
   const regions = Array.from({ length: n * n }, (_, id) => squareRegion(id));
   const basepoints = markings.map((m, i) => {
@@ -36,12 +36,12 @@ export function gridDiagram(n: number, markings: GridMarking[]): CombinatorialDi
 }
 
 /** Grid of S^3 with one z basepoint in each row and column (on the diagonal): multi-pointed, k = n, g = 1. */
-export const gridS3 = (n: number): CombinatorialDiagram =>
-  gridDiagram(n, Array.from({ length: n }, (_, c) => ({ col: c, row: c, kind: 'z' as const })));
+export const combinatorialGridS3 = (n: number): CombinatorialDiagram =>
+  combinatorialGrid(n, Array.from({ length: n }, (_, c) => ({ col: c, row: c, kind: 'z' as const })));
 
 /** A knot grid: X in column c at row xs[c] (kind z), O in column c at row os[c] (kind w) (MOS 2009). */
-export const knotGrid = (xs: number[], os: number[]): CombinatorialDiagram =>
-  gridDiagram(xs.length, [
+export const combinatorialKnotGrid = (xs: number[], os: number[]): CombinatorialDiagram =>
+  combinatorialGrid(xs.length, [
     ...xs.map((row, col) => ({ col, row, kind: 'z' as const })),
     ...os.map((row, col) => ({ col, row, kind: 'w' as const })),
   ]);
@@ -51,7 +51,7 @@ export const knotGrid = (xs: number[], os: number[]): CombinatorialDiagram =>
  * alpha a meridian cut open into an annulus, beta p parallel arcs each climbing q steps; point t at position
  * t/p on alpha; region t is the parallelogram between the arcs leaving points t and t+1; z in region 0.
  */
-export function lensSpaceDiagram(p: number, q: number): CombinatorialDiagram {
+export function combinatorialLensSpace(p: number, q: number): CombinatorialDiagram {
   const regions = Array.from({ length: p }, (_, id) => squareRegion(id, id === 0 ? [0] : []));
   const points = Array.from({ length: p }, (_, t): CombinatorialPoint => ({
     vertex: t, alpha: 0, beta: 0, sign: 1,
@@ -65,7 +65,7 @@ export function lensSpaceDiagram(p: number, q: number): CombinatorialDiagram {
  * B1 = region 0 and B2 = region 1, both from a to b; the rest is an annulus A = region 2. The basepoint sits in
  * A by default (Ozsváth–Szabó 2004, §3), or in a bigon when `basepointInBigon`.
  */
-export function s1s2TwoBigons(basepointInBigon = false): CombinatorialDiagram {
+export function combinatorialS1xS2(basepointInBigon = false): CombinatorialDiagram {
   const zRegion = basepointInBigon ? 0 : 2;
   const regions: CombinatorialRegion[] = [
     { id: 0, chi: 1, corners: 2, eulerQuarters: 2, basepoints: [] },
@@ -81,7 +81,7 @@ export function s1s2TwoBigons(basepointInBigon = false): CombinatorialDiagram {
 }
 
 /** Genus 1 with alpha and beta disjoint parallel circles: two annuli, z in region 0 (not admissible, OS 2004). */
-export function disjointParallelCircles(): CombinatorialDiagram {
+export function combinatorialDisjointCircles(): CombinatorialDiagram {
   return {
     genus: 1, curveCount: 1, points: [],
     regions: [
