@@ -1,0 +1,2 @@
+// Types for database.mjs.
+export function ensureDatabase(url: string): Promise<boolean>;
