@@ -1,0 +1,83 @@
+/**
+ * `quadrant analyze FILE [--json]`: reads a diagram file (OBJ, OFF, STL through parseDiagramFile),
+ * validates it and prints intersection points, regions, Euler measures and curvature. Invalid input:
+ * the problems on stderr, exit code 1.
+ */
+import { parseDiagramFile, type Problem } from '../../../geometry/index.js';
+import { parseArgs, type CliCommand, type CliIO } from '../command.js';
+import { analysisReport, type AnalysisReport } from '../report.js';
+
+const fmt = (x: number, digits = 6): string =>
+  Number.isInteger(x) ? String(x) : Math.abs(x) < 0.5 * 10 ** -digits ? '0' : x.toFixed(digits);
+const quarters = (x: number): string => {
+  const q = Math.round(4 * x);
+  if (q % 4 === 0) return String(q / 4);
+  return q % 2 === 0 ? `${q / 2}/2` : `${q}/4`;
+};
+
+/** One line per problem, with the file line when known. */
+export function problemLines(file: string, problems: Problem[]): string {
+  return problems.map((p) => `  ${file}${p.line !== undefined ? `:${p.line}` : ''}: ${p.message}`).join('\n');
+}
+
+/** The readable text form of a report. */
+export function reportText(file: string, r: AnalysisReport): string {
+  const s = r.surface;
+  const lines = [
+    `${file}`,
+    `surface: ${s.vertices} vertices, ${s.faces} triangles, Euler characteristic ${s.eulerCharacteristic}, genus ${s.genus}, total curvature / 2π = ${fmt(s.totalCurvature, 9)}`,
+    `curves: ${r.alpha} alpha, ${r.beta} beta; basepoints: ${r.basepoints.map((b) => `${b.name} at vertex ${b.vertex} (R_${b.region})`).join(', ') || 'none'}`,
+    '',
+    `intersection points (${r.intersections.length}):`,
+    ...r.intersections.map((p) => `  x_${p.id}  vertex ${p.vertex}  alpha_${p.alpha} ∩ beta_${p.beta}  sign ${p.sign > 0 ? '+1' : '-1'}  quadrants NE R_${p.quadrants[0]}, NW R_${p.quadrants[1]}, SW R_${p.quadrants[2]}, SE R_${p.quadrants[3]}`),
+    '',
+    `regions (${r.regions.length}):`,
+    ...r.regions.map((g) => {
+      const curv = `curvature/2π interior ${fmt(g.curvature.interior)}, boundary ${fmt(g.curvature.boundary)}, corners ${fmt(g.curvature.corners)}`;
+      const bps = g.basepoints.length ? `  contains ${g.basepoints.join(', ')}` : '';
+      return `  R_${g.id}  ${g.faces} triangles  χ ${g.eulerCharacteristic}  corners ${g.convexCorners} convex, ${g.reflexCorners} reflex  e = ${quarters(g.eulerMeasure)} (Gauss–Bonnet ${fmt(g.geometricEulerMeasure, 9)}; ${curv})${bps}`;
+    }),
+    '',
+    `sum of Euler measures: ${quarters(r.eulerMeasureTotal)} (χ(Σ) = ${s.eulerCharacteristic})`,
+  ];
+  if (r.defects.length) lines.push('', 'defects (please report):', ...r.defects.map((d) => `  ${d}`));
+  return lines.join('\n');
+}
+
+async function run(args: string[], io: CliIO): Promise<number> {
+  const { flags, positional } = parseArgs(args);
+  const unknown = [...flags.keys()].filter((f) => f !== 'json');
+  if (positional.length !== 1 || unknown.length) {
+    io.err(`Usage: quadrant analyze FILE [--json]${unknown.length ? `\nunknown option --${unknown[0]}` : ''}`);
+    return 2;
+  }
+  const file = positional[0];
+  let bytes: Uint8Array;
+  try {
+    bytes = io.readFile(file);
+  } catch (e) {
+    const code = (e as { code?: string }).code;
+    io.err(`quadrant analyze: cannot read ${file}${code === 'ENOENT' ? ': no such file' : code ? ` (${code})` : ''}`);
+    return 1;
+  }
+  const parsed = parseDiagramFile(file, bytes);
+  if (!parsed.ok) {
+    io.err(`quadrant analyze: ${file} is not a valid Heegaard diagram:\n${problemLines(file, parsed.errors)}`);
+    return 1;
+  }
+  const report = analysisReport(parsed.value.diagram);
+  if (!report.ok) {
+    io.err(`quadrant analyze: ${file} is not a valid Heegaard diagram:\n${problemLines(file, report.errors)}`);
+    return 1;
+  }
+  if (parsed.value.warnings.length) io.err(`warnings:\n${problemLines(file, parsed.value.warnings)}`);
+  io.out(flags.has('json') ? JSON.stringify(report.value) : reportText(file, report.value));
+  return 0;
+}
+
+export const analyzeCommand: CliCommand = {
+  name: 'analyze',
+  usage: 'FILE [--json]',
+  summary: 'check a diagram file and list its intersection points, regions, Euler measures and curvature',
+  run,
+};
