@@ -27,6 +27,7 @@ export { parseDiagramFile, diagramFromMeshFile, DIAGRAM_FILE_EXTENSIONS } from '
 export { assembleCurves, assembleBasepoints } from './io/assemble-curves.js';
 export { readObj, writeObj } from './io/obj.js';
 export { readOff, writeOff } from './io/off.js';
+export { readPly, writePly } from './io/ply.js';
 export { readStl, writeStl } from './io/stl.js';
 
 // --- surfaces ---

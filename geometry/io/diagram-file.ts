@@ -12,6 +12,7 @@ import { assembleBasepoints, assembleCurves } from './assemble-curves.js';
 import type { MeshFile } from './mesh-file.js';
 import { readObj } from './obj.js';
 import { readOff } from './off.js';
+import { readPly } from './ply.js';
 import { readStl } from './stl.js';
 
 export interface ParsedDiagramFile {
@@ -22,7 +23,7 @@ export interface ParsedDiagramFile {
 }
 
 const READERS: Record<string, (input: Uint8Array | string) => Result<MeshFile>> = {
-  obj: readObj, off: readOff, stl: readStl,
+  obj: readObj, ply: readPly, off: readOff, stl: readStl,
 };
 
 /** The file formats parseDiagramFile reads, as lower-case extensions. */
