@@ -66,10 +66,15 @@ function cornerProblem(comb: CombinatorialDiagram, J: Int32Array, plus: number[]
   for (let i = 0; i < J.length; i++) {
     if (Math.abs(J[i]) > 1) return `the boundary turns ${J[i]} times at ${pointName(comb, i)}; a domain from x to y has corner count -1, 0 or 1 there`;
   }
-  const p1 = generatorProblem(comb, plus, 'x');
-  if (p1 && p1.includes('two points')) return p1;
-  const p2 = generatorProblem(comb, minus, 'y');
-  if (p2 && p2.includes('two points')) return p2;
+  for (const [set, name] of [[plus, 'x'], [minus, 'y']] as const) {
+    const seenA = new Set<number>(), seenB = new Set<number>();
+    for (const i of set) {
+      const p = comb.points[i];
+      if (seenA.has(p.alpha)) return `${name} would use two points on alpha_${p.alpha + 1}`;
+      if (seenB.has(p.beta)) return `${name} would use two points on beta_${p.beta + 1}`;
+      seenA.add(p.alpha); seenB.add(p.beta);
+    }
+  }
   return null;
 }
 
