@@ -38,7 +38,8 @@ export function parseMessage(raw: string): { headers: Map<string, string>; text:
   const head = sep >= 0 ? raw.slice(0, sep) : raw;
   const body = sep >= 0 ? raw.slice(sep).replace(/^\r?\n\r?\n/, '') : '';
   const headers = new Map<string, string>();
-  for (const line of head.replace(/\r?\n[ \t]+/g, ' ').split(/\r?\n/)) {
+  // Unfold (RFC 5322 §2.2.3): a line break followed by white space continues the header.
+  for (const line of head.replace(/\r?\n(?=[ \t])/g, '').split(/\r?\n/)) {
     const i = line.indexOf(':');
     if (i > 0) headers.set(line.slice(0, i).trim().toLowerCase(), line.slice(i + 1).trim());
   }
@@ -51,7 +52,8 @@ export function parseMessage(raw: string): { headers: Map<string, string>; text:
 
 /** Decode an RFC 2047 encoded-word header (=?UTF-8?Q?...?= / =?UTF-8?B?...?=). */
 function decodeHeader(value: string): string {
-  return value.replace(/=\?utf-8\?([qb])\?([^?]*)\?=/gi, (_m, kind: string, data: string) =>
+  // White space between adjacent encoded words is not part of the text (RFC 2047 §6.2).
+  return value.replace(/(\?=)\s+(?==\?)/g, '$1').replace(/=\?utf-8\?([qb])\?([^?]*)\?=/gi, (_m, kind: string, data: string) =>
     kind.toLowerCase() === 'b'
       ? Buffer.from(data, 'base64').toString('utf8')
       : decodeQuotedPrintable(data.replace(/_/g, ' ')),
