@@ -5,6 +5,9 @@ const control =
   'block w-full rounded-md border bg-surface px-3 text-ink placeholder:text-ink-faint ' +
   'focus-visible:outline-offset-0 disabled:bg-sunken disabled:text-ink-muted';
 
+const CHEVRON =
+  "url(\"data:image/svg+xml,%3Csvg xmlns='http://www.w3.org/2000/svg' viewBox='0 0 12 12'%3E%3Cpath d='M2.5 4.5L6 8l3.5-3.5' fill='none' stroke='%234b5565' stroke-width='1.6'/%3E%3C/svg%3E\")";
+
 function controlClass(invalid: boolean, extra?: string) {
   return cx(control, invalid ? 'border-danger' : 'border-line-strong', extra);
 }
@@ -116,7 +119,8 @@ export function SelectField({ label, options, hint, error, hideLabel, containerC
     <FieldFrame id={id} label={label} hint={hint} error={error} className={containerClassName} hideLabel={hideLabel}>
       <select
         id={id}
-        className={controlClass(Boolean(error), cx('h-10 pr-8', className))}
+        className={controlClass(Boolean(error), cx('h-10 cursor-pointer appearance-none bg-[length:12px_12px] bg-[position:right_0.75rem_center] bg-no-repeat pr-9', className))}
+        style={{ backgroundImage: CHEVRON }}
         aria-invalid={error ? true : undefined}
         aria-describedby={describedBy(id, hint, error)}
         {...rest}
