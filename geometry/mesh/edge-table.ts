@@ -3,7 +3,6 @@
  * validation when the directed-edge twins alone cannot say what is wrong (boundaries, non-manifold edges,
  * flipped triangles). Typed arrays only; O(H + sum over vertices of squared degree).
  */
-import { next } from './tri-mesh.js';
 
 export interface EdgeTable {
   /** Number of undirected edges. */
@@ -17,28 +16,32 @@ export interface EdgeTable {
 
 /** Builds the edge table for the first nH half-edges of heVert over nV vertices. O(H + sum deg^2). */
 export function buildEdgeTable(heVert: Int32Array, nH: number, nV: number): EdgeTable {
+  const tip = new Int32Array(nH);
+  for (let h = 0; h < nH; h++) tip[h] = heVert[h % 3 === 2 ? h - 2 : h + 1];
   const lo = new Int32Array(nV + 1);
   for (let h = 0; h < nH; h++) {
-    const a = heVert[h], b = heVert[next(h)];
-    if (a !== b) lo[Math.min(a, b) + 1]++;
+    const a = heVert[h], b = tip[h];
+    if (a !== b) lo[(a < b ? a : b) + 1]++;
   }
   for (let v = 0; v < nV; v++) lo[v + 1] += lo[v];
   const fill = lo.slice(0, nV);
-  const byLo = new Int32Array(lo[nV]);
+  const byLo = new Int32Array(lo[nV]), hiOf = new Int32Array(lo[nV]);
   for (let h = 0; h < nH; h++) {
-    const a = heVert[h], b = heVert[next(h)];
-    if (a !== b) byLo[fill[Math.min(a, b)]++] = h;
+    const a = heVert[h], b = tip[h];
+    if (a === b) continue;
+    const i = fill[a < b ? a : b]++;
+    byLo[i] = h; hiOf[i] = a < b ? b : a;
   }
   const edgeOf = new Int32Array(nH).fill(-1);
-  const hiOf = (h: number): number => Math.max(heVert[h], heVert[next(h)]);
   let nE = 0;
   for (let v = 0; v < nV; v++) {
-    for (let i = lo[v]; i < lo[v + 1]; i++) {
+    const end = lo[v + 1];
+    for (let i = lo[v]; i < end; i++) {
       const h = byLo[i];
       if (edgeOf[h] >= 0) continue;
-      const e = nE++, hi = hiOf(h);
+      const e = nE++, hi = hiOf[i];
       edgeOf[h] = e;
-      for (let j = i + 1; j < lo[v + 1]; j++) if (edgeOf[byLo[j]] < 0 && hiOf(byLo[j]) === hi) edgeOf[byLo[j]] = e;
+      for (let j = i + 1; j < end; j++) if (hiOf[j] === hi) edgeOf[byLo[j]] = e;
     }
   }
   const start = new Int32Array(nE + 1);

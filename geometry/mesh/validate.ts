@@ -44,17 +44,18 @@ function checkFaces(m: TriMesh, label: Label, out: ProblemList, blamed: Uint8Arr
   let found = 0;
   for (let f = 0; f < m.nF; f++) {
     const a = m.heVert[3 * f], b = m.heVert[3 * f + 1], c = m.heVert[3 * f + 2];
-    const verts = [label(a), label(b), label(c)];
     if (a === b || b === c || c === a) {
       found++;
       blamed[a] = blamed[b] = blamed[c] = 1;
+      const verts = [label(a), label(b), label(c)];
       out.add('degenerate-face', 'degenerate triangles', `Triangle ${f + 1} (vertices ${verts.join(', ')}) uses the same vertex twice, so it is not a triangle.`, verts, [f]);
       continue;
     }
-    const longest = Math.max(dist2(m.pos, a, b), dist2(m.pos, b, c), dist2(m.pos, c, a));
-    if (doubleArea(m.pos, a, b, c) <= 1e-12 * longest) {
+    // Zero area relative to the longest side: |2A| <= 1e-12 · L^2.
+    const area = doubleArea(m.pos, a, b, c);
+    if (area <= 1e-12 * Math.max(dist2(m.pos, a, b), dist2(m.pos, b, c), dist2(m.pos, c, a))) {
       found++;
-      out.add('zero-area-face', 'zero-area triangles', `${cap(tri(m, f, label))} has zero area: its corners lie on one line.`, verts, [f]);
+      out.add('zero-area-face', 'zero-area triangles', `${cap(tri(m, f, label))} has zero area: its corners lie on one line.`, [label(a), label(b), label(c)], [f]);
     }
   }
   return found;
