@@ -13,6 +13,8 @@ export const palette = {
   line: '#d8d4c8',
   ink: '#1c2736',
   inkMuted: '#4b5565',
+  inkFaint: '#636a77',
+  lineStrong: '#8a8577',
   accent: '#0f6e74',
   accentSoft: '#e2f0ef',
   focus: '#c2410c',

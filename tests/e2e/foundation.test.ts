@@ -92,6 +92,17 @@ describe('the foundation in a browser', () => {
     await s.screenshot('foundation-404');
   });
 
+  it('offers a skip link as the first stop of the keyboard, and shows a focus ring', async () => {
+    await s.page.keyboard.press('Tab');
+    const skip = s.page.getByRole('link', { name: 'Skip to main content' });
+    await expect(skip.evaluate((el) => el === document.activeElement)).resolves.toBe(true);
+    await expect(skip.isVisible()).resolves.toBe(true);
+    await s.page.keyboard.press('Tab');
+    const outline = await s.page.evaluate(() => getComputedStyle(document.activeElement as Element).outlineStyle);
+    expect(outline).toBe('solid');
+    await s.screenshot('foundation-focus-ring');
+  });
+
   it('signs out from the user menu', async () => {
     await s.page.goto(s.url('/workspaces'));
     await s.page.getByRole('button', { name: `Account: ${DEMO_USERS.owner.name}` }).click();
