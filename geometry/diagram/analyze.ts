@@ -11,9 +11,11 @@ import { regionCurvature, smoothRegionCurvature, wedgeShares, type WedgeShares }
 import { faceComponents } from './face-components.js';
 import { intersectionPoints, type IntersectionPoint } from './points.js';
 import { buildRegions, type RegionInfo } from './region-info.js';
-import { checkCurves } from './validate.js';
+import { checkCurves, type CurveCheck } from './validate.js';
 import { computeWedges, type Wedges } from './wedges.js';
 import type { BasepointKind, HeegaardDiagram } from './types.js';
+
+type DiagramInput = HeegaardDiagram;
 
 const TWO_PI = 2 * Math.PI;
 /** Largest tolerated disagreement between the combinatorial and geometric Euler measures. */
@@ -49,6 +51,17 @@ export interface DiagramAnalysis {
   defects: Problem[];
 }
 
+/** Vertices on the curves, each once, in increasing order. O(curve length log). */
+function curveVertices(m: DiagramInput['mesh'], L: CurveCheck['labels']): Int32Array {
+  const vs = new Int32Array(L.curveHe.length);
+  let n = 0;
+  for (let i = 0; i < L.curveHe.length; i++) {
+    const h = L.curveHe[i], v = m.heVert[h];
+    if (L.vertCurveA[v] === L.heCurve[h] - 1) vs[n++] = v; // count a crossing once, by its first curve
+  }
+  return vs.subarray(0, n).sort();
+}
+
 function checkDefects(a: DiagramAnalysis): void {
   for (const r of a.regions) {
     if (Math.abs(r.geometricEulerMeasure - r.eulerMeasure) > EULER_MEASURE_TOLERANCE) {
@@ -72,12 +85,9 @@ export function analyzeDiagram(d: HeegaardDiagram): Result<DiagramAnalysis> {
   const check = checkCurves(d);
   if (check.problems.length > 0) return fail(...check.problems);
   const m = d.mesh, L = check.labels;
-  const comps = faceComponents(m, L.heCurve, L.familyBit, 3);
+  const comps = check.regions ?? faceComponents(m, L.heCurve, L.familyBit, 3);
   const angles = meshAngles(m);
-  let nCurveVerts = 0;
-  for (let v = 0; v < m.nV; v++) if (L.vertCurveA[v] >= 0) nCurveVerts++;
-  const curveVerts = new Int32Array(nCurveVerts);
-  for (let v = 0, i = 0; v < m.nV; v++) if (L.vertCurveA[v] >= 0) curveVerts[i++] = v;
+  const curveVerts = curveVertices(m, L);
   const wedges = computeWedges(m, L.heCurve, L.familyBit, comps.label, angles.corner, curveVerts);
   const curv = regionCurvature(m, comps.label, comps.count, L.vertCurveA, angles.vertexSum, wedges);
   const shares = wedgeShares(wedges, angles.vertexSum);

@@ -19,6 +19,8 @@ export interface CurveLabels {
   vertCurveB: Int32Array;
   /** 1 for alpha, 2 for beta, per curve position. */
   familyBit: Uint8Array;
+  /** Every half-edge a curve runs along in its own direction (heCurve[h] > 0), in curve order. */
+  curveHe: Int32Array;
   /** Vertices (0-based) through which more than two curves pass. */
   crowded: Map<number, number[]>;
   problems: Problem[];
@@ -64,7 +66,7 @@ function addVertexCurve(L: CurveLabels, v: number, c: number): 'ok' | 'repeat' {
 }
 
 /** Lays one curve on the mesh, recording problems in words (vertex numbers as in the user's file). */
-function layCurve(d: HeegaardDiagram, L: CurveLabels, c: number): void {
+function layCurve(d: HeegaardDiagram, L: CurveLabels, c: number, along: number[]): void {
   const m = d.mesh;
   const curve = d.curves[c];
   const name = curveName(curve);
@@ -111,6 +113,7 @@ function layCurve(d: HeegaardDiagram, L: CurveLabels, c: number): void {
       continue;
     }
     L.heCurve[h] = c + 1;
+    along.push(h);
     const t = m.heTwin[h];
     if (t >= 0) L.heCurve[t] = -(c + 1);
   }
@@ -124,9 +127,12 @@ export function labelCurveEdges(d: HeegaardDiagram): CurveLabels {
     vertCurveA: new Int32Array(m.nV).fill(-1),
     vertCurveB: new Int32Array(m.nV).fill(-1),
     familyBit: Uint8Array.from(d.curves, (c) => (c.family === 'alpha' ? 1 : 2)),
+    curveHe: new Int32Array(0),
     crowded: new Map(),
     problems: [],
   };
-  for (let c = 0; c < d.curves.length; c++) layCurve(d, L, c);
+  const along: number[] = [];
+  for (let c = 0; c < d.curves.length; c++) layCurve(d, L, c, along);
+  L.curveHe = Int32Array.from(along);
   return L;
 }

@@ -8,6 +8,10 @@ import type { TriMesh } from '../mesh/tri-mesh.js';
 export interface FaceComponents {
   label: Int32Array;
   count: number;
+  /** Faces per component. */
+  faces: Int32Array;
+  /** Lowest face of each component. */
+  firstFace: Int32Array;
 }
 
 /**
@@ -21,13 +25,15 @@ export function faceComponents(m: TriMesh, heCurve: Int32Array, familyBit: Uint8
   const stack = new Int32Array(nF);
   const twin = m.heTwin;
   let count = 0;
+  const sizes: number[] = [], firsts: number[] = [];
   for (let seed = 0; seed < nF; seed++) {
     if (label[seed] >= 0) continue;
-    let top = 0;
+    let top = 0, size = 0;
     stack[top++] = seed;
     label[seed] = count;
     while (top > 0) {
       const f = stack[--top];
+      size++;
       for (let h = 3 * f; h < 3 * f + 3; h++) {
         const c = heCurve[h];
         if (c !== 0 && (familyBit[(c < 0 ? -c : c) - 1] & mask) !== 0) continue;
@@ -37,7 +43,9 @@ export function faceComponents(m: TriMesh, heCurve: Int32Array, familyBit: Uint8
         if (label[g] < 0) { label[g] = count; stack[top++] = g; }
       }
     }
+    sizes.push(size);
+    firsts.push(seed);
     count++;
   }
-  return { label, count };
+  return { label, count, faces: Int32Array.from(sizes), firstFace: Int32Array.from(firsts) };
 }

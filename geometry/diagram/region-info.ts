@@ -54,16 +54,20 @@ export interface RegionInfo {
   basepoints: number[];
 }
 
-/** Cell counts F, E_interior, H_boundary, W per region (cut-open cell structure). O(F + V). */
+/**
+ * Cell counts F, E_interior, H_boundary, W per region (cut-open cell structure). Each face has three
+ * half-edges and non-curve half-edges pair up inside one region, so E_interior = (3F − H) / 2.
+ * O(V + curve edges).
+ */
 function cellCounts(d: HeegaardDiagram, L: CurveLabels, comps: FaceComponents, w: Wedges) {
   const m = d.mesh, n = comps.count, lab = comps.label;
-  const F = new Int32Array(n), E = new Int32Array(n), H = new Int32Array(n), W = new Int32Array(n);
-  for (let f = 0; f < m.nF; f++) F[lab[f]]++;
-  for (let h = 0; h < 3 * m.nF; h++) {
-    const r = lab[(h / 3) | 0];
-    if (L.heCurve[h] !== 0) H[r]++;
-    else if (h < m.heTwin[h]) E[r]++;
+  const F = comps.faces, E = new Int32Array(n), H = new Int32Array(n), W = new Int32Array(n);
+  for (let i = 0; i < L.curveHe.length; i++) {
+    const h = L.curveHe[i];
+    H[lab[(h / 3) | 0]]++;
+    H[lab[(m.heTwin[h] / 3) | 0]]++;
   }
+  for (let r = 0; r < n; r++) E[r] = (3 * F[r] - H[r]) / 2;
   for (let v = 0; v < m.nV; v++) {
     const h = m.vertHe[v];
     if (h >= 0 && L.vertCurveA[v] < 0) W[lab[(h / 3) | 0]]++;
@@ -72,15 +76,15 @@ function cellCounts(d: HeegaardDiagram, L: CurveLabels, comps: FaceComponents, w
   return { F, E, H, W };
 }
 
-/** Curves along each region's boundary. O(curve half-edges). */
+/** Curves along each region's boundary. O(curve edges). */
 function boundaryCurves(d: HeegaardDiagram, L: CurveLabels, comps: FaceComponents): { alpha: Set<number>; beta: Set<number> }[] {
   const out = Array.from({ length: comps.count }, () => ({ alpha: new Set<number>(), beta: new Set<number>() }));
   const m = d.mesh;
-  for (let h = 0; h < 3 * m.nF; h++) {
-    const c = L.heCurve[h];
-    if (c === 0) continue;
-    const curve = d.curves[Math.abs(c) - 1];
+  for (let i = 0; i < L.curveHe.length; i++) {
+    const h = L.curveHe[i];
+    const curve = d.curves[L.heCurve[h] - 1];
     out[comps.label[(h / 3) | 0]][curve.family].add(curve.index);
+    out[comps.label[(m.heTwin[h] / 3) | 0]][curve.family].add(curve.index);
   }
   return out;
 }

@@ -16,6 +16,8 @@ export interface CurveCheck {
   genus: number;
   /** Number of alpha curves (= beta curves when valid). */
   k: number;
+  /** Regions of Σ ∖ (α ∪ β), when the curves lie on the mesh without structural problems. */
+  regions?: FaceComponents;
 }
 
 /** Families of the curve half-edges around v, counter-clockwise (1 alpha, 2 beta). O(degree). */
@@ -40,9 +42,10 @@ function checkCrossings(d: HeegaardDiagram, L: CurveLabels, problems: Problem[])
     const names = list.map((c) => curveNameAt(d, c));
     problems.push({ code: 'too-many-curves-at-vertex', message: `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]} all pass through vertex ${lab}; at most one alpha and one beta curve may meet at a vertex`, vertices: [lab] });
   }
-  for (let v = 0; v < m.nV; v++) {
+  for (let i = 0; i < L.curveHe.length; i++) {
+    const v = m.heVert[L.curveHe[i]];
     const a = L.vertCurveA[v], b = L.vertCurveB[v];
-    if (b < 0 || L.crowded.has(v)) continue;
+    if (b < 0 || a !== Math.abs(L.heCurve[L.curveHe[i]]) - 1 || L.crowded.has(v)) continue;
     const lab = vertexLabel(d, v);
     const na = curveNameAt(d, a), nb = curveNameAt(d, b);
     if (L.familyBit[a] === L.familyBit[b]) {
@@ -95,33 +98,58 @@ function checkBasepointPlaces(d: HeegaardDiagram, L: CurveLabels, problems: Prob
 const faceVertexLabel = (d: HeegaardDiagram, f: number): number => vertexLabel(d, d.mesh.heVert[3 * f]);
 
 /**
+ * Pieces of Σ minus one family, as a piece number per region: regions joined across the other family's
+ * edges (union–find over regions, Tarjan 1975). O(curve edges + regions).
+ */
+function piecesOfRegions(d: HeegaardDiagram, L: CurveLabels, regions: FaceComponents, famBit: number): { piece: Int32Array; count: number } {
+  const parent = Int32Array.from({ length: regions.count }, (_, i) => i);
+  const find = (x: number): number => {
+    while (parent[x] !== x) { parent[x] = parent[parent[x]]; x = parent[x]; }
+    return x;
+  };
+  const m = d.mesh;
+  for (let i = 0; i < L.curveHe.length; i++) {
+    const h = L.curveHe[i];
+    if (L.familyBit[L.heCurve[h] - 1] === famBit) continue;
+    const a = find(regions.label[(h / 3) | 0]), b = find(regions.label[(m.heTwin[h] / 3) | 0]);
+    if (a !== b) parent[Math.max(a, b)] = Math.min(a, b);
+  }
+  const piece = new Int32Array(regions.count).fill(-1);
+  let count = 0;
+  for (let r = 0; r < regions.count; r++) {
+    const root = find(r);
+    piece[r] = root === r ? count++ : piece[root];
+  }
+  return { piece, count };
+}
+
+/**
  * Count rules for one family: Σ minus the family has k - g + 1 pieces and each piece holds exactly one
  * z basepoint (and one w basepoint when w basepoints are given) [Ozsváth–Szabó 2004; MOS 2009].
  * Pieces of a closed surface cut along k disjoint circles number 1 + k - g + Σ genus(piece), so too many
  * pieces means some piece keeps a handle.
  */
-function checkFamilyPieces(d: HeegaardDiagram, L: CurveLabels, fam: 'alpha' | 'beta', k: number, g: number, problems: Problem[]): FaceComponents {
+function checkFamilyPieces(d: HeegaardDiagram, L: CurveLabels, regions: FaceComponents, fam: 'alpha' | 'beta', k: number, g: number, problems: Problem[]): void {
   const m = d.mesh;
-  const parts = faceComponents(m, L.heCurve, L.familyBit, fam === 'alpha' ? 1 : 2);
+  const parts = piecesOfRegions(d, L, regions, fam === 'alpha' ? 1 : 2);
   const want = k - g + 1;
   if (parts.count !== want) {
     problems.push({ code: 'family-does-not-cut', message: `the ${fam} curves cut the surface into ${parts.count} piece${parts.count === 1 ? '' : 's'}, but with k = ${k} curves on a genus-${g} surface there must be k - g + 1 = ${want}: some piece still carries a handle, so the ${fam} curves do not bound a handlebody` });
-    return parts;
+    return;
   }
   const firstFace = new Int32Array(parts.count).fill(-1);
-  for (let f = 0; f < m.nF; f++) if (firstFace[parts.label[f]] < 0) firstFace[parts.label[f]] = f;
+  for (let r = 0; r < regions.count; r++) if (firstFace[parts.piece[r]] < 0) firstFace[parts.piece[r]] = regions.firstFace[r];
   for (const kind of ['z', 'w'] as const) {
     const pts = d.basepoints.filter((p) => p.kind === kind && p.vertex >= 0 && p.vertex < m.nV && m.vertHe[p.vertex] >= 0 && L.vertCurveA[p.vertex] < 0);
     if (kind === 'w' && pts.length === 0) continue;
     const held: string[][] = Array.from({ length: parts.count }, () => []);
-    for (const p of pts) held[parts.label[(m.vertHe[p.vertex] / 3) | 0]].push(`${kind}_${p.index + 1}`);
+    for (const p of pts) held[parts.piece[regions.label[(m.vertHe[p.vertex] / 3) | 0]]].push(`${kind}_${p.index + 1}`);
     held.forEach((names, i) => {
       if (names.length === 1) return;
       const where = `the piece of the surface cut along the ${fam} curves that contains vertex ${faceVertexLabel(d, firstFace[i])}`;
       problems.push({ code: names.length === 0 ? 'piece-without-basepoint' : 'piece-with-several-basepoints', message: names.length === 0 ? `${where} holds no ${kind} basepoint; each piece must hold exactly one` : `${where} holds ${names.length} ${kind} basepoints (${names.join(', ')}); each piece must hold exactly one` });
     });
   }
-  return parts;
 }
 
 /** Full curve check, keeping the labels for the analysis. O(F + total curve length x degree). */
@@ -145,11 +173,13 @@ export function checkCurves(d: HeegaardDiagram): CurveCheck {
     problems.push({ code: 'curve-count', message: `the diagram has ${nA} alpha curve${nA === 1 ? '' : 's'} and ${nB} beta curve${nB === 1 ? '' : 's'}; a Heegaard diagram has as many alpha as beta curves` });
   } else if (k < genus) {
     problems.push({ code: 'too-few-curves', message: `the surface has genus ${genus} but the diagram has only ${k} alpha and ${k} beta curve${k === 1 ? '' : 's'}; a Heegaard diagram needs at least g = ${genus} of each` });
-  } else {
-    checkFamilyPieces(d, L, 'alpha', k, genus, problems);
-    checkFamilyPieces(d, L, 'beta', k, genus, problems);
   }
-  return { labels: L, problems, genus, k };
+  const regions = faceComponents(m, L.heCurve, L.familyBit, 3);
+  if (problems.length === 0) {
+    checkFamilyPieces(d, L, regions, 'alpha', k, genus, problems);
+    checkFamilyPieces(d, L, regions, 'beta', k, genus, problems);
+  }
+  return { labels: L, problems, genus, k, regions };
 }
 
 /**
