@@ -17,8 +17,12 @@ export const PLY_TYPES: Record<string, PlyType> = {
 const SIZE: Record<PlyType, number> = { int8: 1, uint8: 1, int16: 2, uint16: 2, int32: 4, uint32: 4, float32: 4, float64: 8 };
 
 export interface PlySource {
-  /** Reads one value; `what` describes it for error messages ("face 12"). */
-  read(type: PlyType, what: string): number;
+  /** Names the element instance being read (for messages); call before its first value. */
+  begin(element: string, index: number): void;
+  /** Reads one value of the current instance. */
+  read(type: PlyType): number;
+  /** "face 12" (0-based, as PLY numbers elements). */
+  what(): string;
   /** For ASCII: moves to the next line (one element instance per line). */
   endInstance(): void;
   /** Where we are: line (ASCII) or byte offset (binary), for messages. */
@@ -31,22 +35,32 @@ export interface PlySource {
 export class AsciiPlySource implements PlySource {
   pos: number;
   line: number;
+  private element = '';
+  private index = 0;
   constructor(private readonly text: string, start: number, firstLine: number) {
     this.pos = start;
     this.line = firstLine;
   }
 
-  read(type: PlyType, what: string): number {
+  begin(element: string, index: number): void {
+    this.element = element; this.index = index;
+  }
+
+  what(): string {
+    return `${this.element} ${this.index}`;
+  }
+
+  read(type: PlyType): number {
     const t = this.text;
     let i = this.pos;
     while (i < t.length && (t.charCodeAt(i) === 32 || t.charCodeAt(i) === 9 || t.charCodeAt(i) === 13)) i++;
-    if (i >= t.length || t.charCodeAt(i) === 10) this.fail(i >= t.length ? 'truncated' : 'bad-number', i >= t.length ? `Line ${this.line}: the file ends inside ${what}.` : `Line ${this.line}: ${what} has too few values.`);
+    if (i >= t.length || t.charCodeAt(i) === 10) this.fail(i >= t.length ? 'truncated' : 'bad-number', i >= t.length ? `Line ${this.line}: the file ends inside ${this.what()}.` : `Line ${this.line}: ${this.what()} has too few values.`);
     let j = i;
     while (j < t.length && t.charCodeAt(j) > 32) j++;
     this.pos = j;
     const tok = t.slice(i, j), x = Number(tok);
-    if (!Number.isFinite(x)) this.fail('bad-number', `Line ${this.line}: ${what}: '${tok}' is not a number.`);
-    if (!type.startsWith('float') && !Number.isInteger(x)) this.fail('bad-number', `Line ${this.line}: ${what}: '${tok}' should be a whole number.`);
+    if (!Number.isFinite(x)) this.fail('bad-number', `Line ${this.line}: ${this.what()}: '${tok}' is not a number.`);
+    if (type !== 'float32' && type !== 'float64' && !Number.isInteger(x)) this.fail('bad-number', `Line ${this.line}: ${this.what()}: '${tok}' should be a whole number.`);
     return x;
   }
 
@@ -65,13 +79,24 @@ export class AsciiPlySource implements PlySource {
 /** Binary body with explicit endianness. */
 export class BinaryPlySource implements PlySource {
   private readonly dv: DataView;
+  private element = '';
+  private index = 0;
+  private start = 0;
   constructor(bytes: Uint8Array, public offset: number, private readonly little: boolean) {
     this.dv = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   }
 
-  read(type: PlyType, what: string): number {
+  begin(element: string, index: number): void {
+    this.element = element; this.index = index; this.start = this.offset;
+  }
+
+  what(): string {
+    return `${this.element} ${this.index}`;
+  }
+
+  read(type: PlyType): number {
     const o = this.offset, n = SIZE[type];
-    if (o + n > this.dv.byteLength) this.fail('truncated', `Byte ${this.dv.byteLength}: the file ends inside ${what} (which starts at or before byte ${o}).`);
+    if (o + n > this.dv.byteLength) this.fail('truncated', `Byte ${this.dv.byteLength}: the file ends inside ${this.what()}, which starts at byte ${this.start}.`);
     this.offset = o + n;
     const dv = this.dv, le = this.little;
     switch (type) {
@@ -81,13 +106,13 @@ export class BinaryPlySource implements PlySource {
       case 'uint16': return dv.getUint16(o, le);
       case 'int32': return dv.getInt32(o, le);
       case 'uint32': return dv.getUint32(o, le);
-      case 'float32': return this.finite(dv.getFloat32(o, le), what, o);
-      case 'float64': return this.finite(dv.getFloat64(o, le), what, o);
+      case 'float32': return this.finite(dv.getFloat32(o, le), o);
+      case 'float64': return this.finite(dv.getFloat64(o, le), o);
     }
   }
 
-  private finite(x: number, what: string, o: number): number {
-    if (!Number.isFinite(x)) throw new FileProblem('bad-number', `Byte ${o}: ${what} holds a value that is not a finite number.`, undefined, o);
+  private finite(x: number, o: number): number {
+    if (!Number.isFinite(x)) throw new FileProblem('bad-number', `Byte ${o}: ${this.what()} holds a value that is not a finite number.`, undefined, o);
     return x;
   }
 

@@ -112,14 +112,14 @@ function readBody(h: PlyHeader, src: PlySource): MeshFile {
 function eachInstance(el: PlyElement, src: PlySource, use: (vals: (number | number[])[], i: number) => void): void {
   const vals: (number | number[])[] = el.props.map((p) => (p.countType ? [] : 0));
   for (let i = 0; i < el.count; i++) {
-    const what = `${el.name} ${i}`;
+    src.begin(el.name, i);
     for (let k = 0; k < el.props.length; k++) {
       const p = el.props[k];
-      if (!p.countType) { vals[k] = src.read(p.type, what); continue; }
-      const n = src.read(p.countType, what), list = vals[k] as number[];
-      if (n < 0 || n > 1 << 20) src.fail('bad-number', `${src.line ? `Line ${src.line}: ` : ''}${what} has an impossible list length ${n}.`);
+      if (!p.countType) { vals[k] = src.read(p.type); continue; }
+      const n = src.read(p.countType), list = vals[k] as number[];
+      if (n < 0 || n > 1 << 20) src.fail('bad-number', `${at(src)}${src.what()} has an impossible list length ${n}.`);
       list.length = 0;
-      for (let j = 0; j < n; j++) list.push(src.read(p.type, what));
+      for (let j = 0; j < n; j++) list.push(src.read(p.type));
     }
     use(vals, i);
     src.endInstance();

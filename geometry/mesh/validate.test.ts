@@ -65,6 +65,18 @@ describe('validateSurface', () => {
     expect(codes).toContain('open-boundary');
   });
 
+  it('reports a closed Klein bottle as non-orientable (common practice: the Klein bottle is non-orientable)', () => {
+    // Grid on [0, nu) x [0, nv) glued (nu, j) ~ (0, -j): a closed surface with one orientation-reversing seam.
+    const nu = 8, nv = 6;
+    const { pos } = torusGrid({ R: 3, r: 1, nu, nv });
+    const id = (i: number, j: number) => (i === nu ? 0 : i) * nv + ((((i === nu ? -j : j) % nv) + nv) % nv);
+    const tris: number[] = [];
+    for (let i = 0; i < nu; i++) for (let j = 0; j < nv; j++) tris.push(id(i, j), id(i + 1, j), id(i + 1, j + 1), id(i, j), id(i + 1, j + 1), id(i, j + 1));
+    const { codes, problems } = codesOf(pos, tris);
+    expect(codes).toEqual(['inconsistent-orientation', 'non-orientable']);
+    expect(problems.find((p) => p.code === 'non-orientable')!.message).toMatch(/^The surface is not orientable \(it contains a Möbius band\)/);
+  });
+
   it('reports degenerate triangles: a repeated vertex and zero area', () => {
     const pos = [...octPos, 0.5, 0.5, 0];
     expect(codesOf(pos, [...octTris, 0, 0, 2]).codes).toContain('degenerate-face');
