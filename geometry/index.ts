@@ -90,7 +90,7 @@ export { hfHatNice, generatorTable } from './floer/hf-hat.js';
 export type { ClassesAndGradings } from './floer/spinc-grading.js';
 export { classesAndGradings } from './floer/spinc-grading.js';
 export type { FloerSummary, FloerSummaryOptions } from './floer/summary.js';
-export { floerSummary } from './floer/summary.js';
+export { floerSummary, floerReportFields } from './floer/summary.js';
 export type { GridMarking } from './floer/model-diagrams.js';
 export {
   combinatorialGrid, combinatorialGridS3, combinatorialKnotGrid, combinatorialLensSpace, combinatorialS1xS2,
@@ -104,3 +104,8 @@ export type { TemplateSpec } from './construct/templates.js';
 export { buildTemplate } from './construct/templates.js';
 export { lensDiagram, torusCurveDiagram, gridDiagram, s1xs2TorusDiagram } from './construct/torus-templates.js';
 export { genusS3Diagram, genusS1xS2Diagram } from './construct/genus-templates.js';
+export type { SubdivisionScheme } from './construct/subdivide.js';
+export { subdivideDiagram } from './construct/subdivide.js';
+export type { TwistOptions } from './construct/twist.js';
+export { dehnTwist, curveIndexByName } from './construct/twist.js';
+export { fingerMove } from './construct/finger.js';

@@ -86,3 +86,22 @@ export function floerSummary(comb: CombinatorialDiagram, options: FloerSummaryOp
   }
   return out;
 }
+
+/**
+ * The Floer fields of a user-facing analysis report (`quadrant analyze --json`): region numbers 1-based
+ * (R_1, ...), per-generator data left out. Same cost as floerSummary.
+ */
+export function floerReportFields(comb: CombinatorialDiagram, options: FloerSummaryOptions = {}): Record<string, unknown> {
+  const s = floerSummary(comb, { generatorLimit: 200_000, ...options });
+  return {
+    generators: s.generators,
+    h1: s.h1,
+    periodicDomains: s.periodicDomains,
+    weaklyAdmissible: s.weaklyAdmissible,
+    ...(s.offendingPeriodicDomain ? { offendingPeriodicDomain: s.offendingPeriodicDomain } : {}),
+    nice: s.nice,
+    ...(s.notNiceRegions ? { notNiceRegions: s.notNiceRegions.map((r) => ({ ...r, region: r.region + 1 })) } : {}),
+    hfHat: s.hfHat,
+    ...(s.hfHatReason ? { hfHatReason: s.hfHatReason } : {}),
+  };
+}

@@ -6,7 +6,7 @@
  * Other areas add fields with one line in REPORT_SECTIONS (e.g. generators, h1, periodicDomains).
  */
 import {
-  analyzeDiagram, curveName, toCombinatorial, vertexLabel,
+  analyzeDiagram, curveName, floerReportFields, toCombinatorial, vertexLabel,
   type CombinatorialDiagram, type DiagramAnalysis, type HeegaardDiagram, type Problem, type Result,
 } from '../../geometry/index.js';
 
@@ -56,6 +56,7 @@ export interface ReportContext {
 
 /** Extra report fields from other areas; add one line per section. Each returns fields to merge in. */
 export const REPORT_SECTIONS: ((ctx: ReportContext) => Record<string, unknown>)[] = [
+  ({ combinatorial }) => floerReportFields(combinatorial),
 ];
 
 function regionReport(d: HeegaardDiagram, a: DiagramAnalysis, r: DiagramAnalysis['regions'][number]): ReportRegion {
