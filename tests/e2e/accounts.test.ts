@@ -80,3 +80,70 @@ describe('accounts and workspaces in a browser', () => {
     await s.page.getByRole('heading', { level: 1, name: 'Workspaces' }).waitFor();
   });
 });
+
+describe('invitations in a browser', () => {
+  let owner: BrowserSession;
+  let invitee: BrowserSession;
+  const stamp = Date.now().toString(36);
+  const ownerEmail = `host.${stamp}@example.test`;
+  const inviteeEmail = `guest.${stamp}@example.test`;
+  let acceptLink = '';
+
+  beforeAll(async () => {
+    owner = await launchBrowser();
+    invitee = await launchBrowser();
+  });
+  afterAll(async () => {
+    await owner?.close();
+    await invitee?.close();
+  });
+
+  it('lets a new owner invite a colleague, listing the invitation as pending', async () => {
+    const p = owner.page;
+    await p.goto(owner.url('/sign-up'));
+    await p.getByLabel('Name').fill('Rowan Ashgrove-Pell');
+    await p.getByLabel('Email').fill(ownerEmail);
+    await p.getByLabel('Password').fill('a-long-enough-passphrase');
+    await p.getByRole('button', { name: 'Create account' }).click();
+    await p.getByLabel('Workspace name').fill('Seifert seminar');
+    await p.getByRole('button', { name: 'Create workspace' }).click();
+    await p.getByRole('heading', { level: 1, name: 'Seifert seminar' }).waitFor();
+    await p.getByRole('link', { name: 'Members' }).click();
+    await p.getByLabel('Email address').fill(inviteeEmail);
+    await p.getByLabel('Role', { exact: true }).selectOption('viewer');
+    await p.getByRole('button', { name: 'Send invitation' }).click();
+    await p.getByText(`Invitation sent to ${inviteeEmail}.`).waitFor();
+    await p.getByRole('region', { name: 'Pending invitations' }).getByText(inviteeEmail).waitFor();
+    await owner.screenshot('accounts-invitation-pending');
+  });
+
+  it('mails an accept link (read from the development outbox)', async () => {
+    const res = await fetch(new URL('/api/dev/mail', owner.baseUrl));
+    expect(res.status).toBe(200);
+    const { messages } = (await res.json()) as { messages: { to: string[]; text: string }[] };
+    const mail = messages.find((m) => m.to.includes(inviteeEmail));
+    expect(mail).toBeDefined();
+    acceptLink = /https?:\/\/\S+\/invitations\/accept\?token=\S+/.exec(mail!.text)?.[0] ?? '';
+    expect(acceptLink).not.toBe('');
+  });
+
+  it('takes the invitee through sign-up back to the invitation, and into the workspace', async () => {
+    const p = invitee.page;
+    await p.goto(acceptLink);
+    await p.waitForURL((u) => u.pathname === '/sign-in');
+    await p.getByRole('link', { name: 'Create an account' }).click();
+    await p.getByLabel('Name').fill('Ada Quillon-Marsh');
+    await p.getByLabel('Email').fill(inviteeEmail);
+    await p.getByLabel('Password').fill('another-long-passphrase');
+    await p.getByRole('button', { name: 'Create account' }).click();
+    await p.getByRole('heading', { level: 1, name: 'Join a workspace' }).waitFor();
+    await invitee.screenshot('accounts-invitation-accept');
+    await p.getByRole('button', { name: 'Accept invitation' }).click();
+    await p.getByRole('heading', { level: 1, name: 'Seifert seminar' }).waitFor();
+    await p.getByRole('link', { name: 'Members' }).click();
+    const table = p.getByRole('table', { name: /Members of/ });
+    await table.getByRole('row', { name: /Ada Quillon-Marsh/ }).getByText('Viewer').waitFor();
+    // A viewer sees roles but no controls to change them.
+    await expect(p.getByRole('combobox').count()).resolves.toBe(0);
+  });
+});

@@ -5,10 +5,8 @@ import { Alert, Button, ButtonLink, Card, LogoMark } from '../../lib/ui';
 import { useAcceptInvitation } from './api';
 
 function acceptMessage(error: unknown): string {
-  if (error instanceof ApiError) {
-    if (error.code === 'not_found' || error.code === 'validation') return 'This invitation link is not valid. It may have been mistyped or withdrawn.';
-    if (error.code === 'conflict') return error.message || 'This invitation has already been used or has expired.';
-    if (error.code === 'forbidden') return error.message || 'This invitation was sent to a different email address.';
+  if (error instanceof ApiError && error.code === 'validation') {
+    return 'This invitation link is not valid. It may have been cut short when it was copied.';
   }
   return errorMessage(error);
 }
