@@ -5,8 +5,14 @@
 import type { CliCommand } from './command.js';
 import { analyzeCommand } from './commands/analyze.js';
 import { domainCommand } from './commands/domain.js';
+import { templateCommand } from './commands/template.js';
+import { twistCommand } from './commands/twist.js';
+import { subdivideCommand } from './commands/subdivide.js';
 
 export const COMMANDS: CliCommand[] = [
   analyzeCommand,
   domainCommand,
+  templateCommand,
+  twistCommand,
+  subdivideCommand,
 ];
