@@ -76,6 +76,13 @@ describe('OBJ reader', () => {
     expect(bad('v 0 0 0\nv 1 0 0\ng z_1\np 1\np 2')!.message).toContain('z_1 is given 2 points');
   });
 
+  it('ignores a UTF-8 byte-order mark before the first line (Unicode 15, §23.8)', () => {
+    const bytes = Uint8Array.from([0xef, 0xbb, 0xbf, ...'v 0 0 0\nv 1 0 0\nv 0 1 0\nf 1 2 3\n'].map((c) => (typeof c === 'number' ? c : c.charCodeAt(0))));
+    const r = readObj(bytes);
+    expect(r.ok && Array.from(r.value.tris)).toEqual([0, 1, 2]);
+    expect(readObj('\ufeffv 0 0 0\nv 1 0 0\nv 0 1 0\nf 1 2 3').ok).toBe(true);
+  });
+
   it('warns about polylines outside curve groups', () => {
     const r = readObj('v 0 0 0\nv 1 0 0\ng wires\nl 1 2\nl 2 1');
     expect(r.ok && r.value.warnings.map((w) => w.code)).toEqual(['ignored-polyline']);

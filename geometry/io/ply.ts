@@ -22,7 +22,8 @@ interface PlyHeader { format: 'ascii' | 'binary_little_endian' | 'binary_big_end
 /** Reads ASCII or binary PLY. Errors carry the line (ASCII, header) or byte offset (binary body). O(size). */
 export function readPly(input: Uint8Array | string): Result<MeshFile> {
   return guard(() => {
-    const bytes = asBytes(input);
+    let bytes = asBytes(input);
+    if (bytes[0] === 0xef && bytes[1] === 0xbb && bytes[2] === 0xbf) bytes = bytes.subarray(3);
     const header = parseHeader(bytes);
     const src: PlySource = header.format === 'ascii'
       ? new AsciiPlySource(asText(bytes.subarray(header.bodyStart)), 0, header.bodyLine)

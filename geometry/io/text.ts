@@ -28,9 +28,13 @@ export function guard<T>(body: () => T): Result<T> {
   }
 }
 
-/** Bytes as text, one character per byte (Latin-1; every keyword of OBJ/PLY/OFF/STL is ASCII). O(n). */
+/**
+ * Bytes as text, one character per byte (Latin-1; every keyword of OBJ/PLY/OFF/STL is ASCII). A leading
+ * UTF-8 byte-order mark is dropped. O(n).
+ */
 export function asText(input: Uint8Array | string): string {
-  if (typeof input === 'string') return input;
+  if (typeof input === 'string') return input.charCodeAt(0) === 0xfeff ? input.slice(1) : input;
+  if (input[0] === 0xef && input[1] === 0xbb && input[2] === 0xbf) input = input.subarray(3);
   const parts: string[] = [];
   for (let i = 0; i < input.length; i += 0x8000) parts.push(String.fromCharCode.apply(null, input.subarray(i, i + 0x8000) as unknown as number[]));
   return parts.join('');
