@@ -119,7 +119,7 @@ function walkCurve(em: EditMesh, id: number, startVertex: number): Int32Array | 
 
 /** `partial`: accept a diagram still being drawn (unequal curve counts, basepoint placement not final). */
 export interface CloseOptions { partial?: boolean }
-const PARTIAL_OK = new Set(['curve-count', 'too-few-curves', 'family-does-not-cut', 'piece-without-basepoint', 'piece-with-several-basepoints']);
+const PARTIAL_OK = new Set(['curve-count', 'too-few-curves', 'family-does-not-cut', 'curve-numbering', 'piece-without-basepoint', 'piece-with-several-basepoints']);
 
 /**
  * Reads a workspace back into a new HeegaardDiagram after checking connectivity and every curve
