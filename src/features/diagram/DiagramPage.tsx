@@ -21,6 +21,7 @@ import { HomologyPanel } from './panels/HomologyPanel';
 import { PointsPanel } from './panels/PointsPanel';
 import { RegionsPanel } from './panels/RegionsPanel';
 import type { Focus } from './panels/shared';
+import { ShareExport } from './ShareExport';
 import { ViewPane } from './ViewPane';
 
 type TabId = 'regions' | 'points' | 'generators' | 'domains' | 'homology' | 'edit' | 'history';
@@ -244,6 +245,7 @@ export default function DiagramPage() {
         <div className="flex flex-wrap items-center gap-3">
           {!isHead && head !== null && <Button size="sm" variant="secondary" onClick={() => viewRevision(null)}>Show the latest revision</Button>}
           {running && <ProgressBar value={analysis.data!.progress} label="Analysing" />}
+          {rev !== null && <ShareExport diagramId={diagramId} revision={rev} canEdit={canEdit} />}
         </div>
       </header>
 
