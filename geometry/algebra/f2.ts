@@ -33,26 +33,36 @@ function xorSorted(a: Int32Array, b: Int32Array): Int32Array {
  * grading). `onProgress` gets the fraction of columns done.
  */
 export function rankF2(m: SparseF2, onProgress?: (fraction: number) => void): number {
+  return reduceF2(m, null, onProgress).rank;
+}
+
+/**
+ * Column reduction as in rankF2, skipping the columns flagged in `skip` and returning the lowest row of every
+ * surviving column. With chain complexes (∂∂ = 0), the pivot rows of ∂_{d+1} are columns of ∂_d that reduce
+ * to zero, so they may be skipped ("clearing", Chen–Kerber 2011, Persistent homology computation with a twist).
+ */
+export function reduceF2(m: SparseF2, skip: Uint8Array | null, onProgress?: (fraction: number) => void): { rank: number; pivotRows: Int32Array } {
   const owner = new Int32Array(m.rows).fill(-1);
   const reduced: (Int32Array | null)[] = new Array(m.cols).fill(null);
-  let rank = 0;
+  const pivots: number[] = [];
   const every = Math.max(1, Math.floor(m.cols / 50));
   for (let j = 0; j < m.cols; j++) {
+    if (skip && skip[j]) continue;
     let col: Int32Array = m.rowIdx.subarray(m.colStart[j], m.colStart[j + 1]);
     while (col.length > 0) {
       const low = col[col.length - 1];
       const o = owner[low];
       if (o < 0) {
         owner[low] = j;
-        reduced[j] = col.slice();
-        rank++;
+        reduced[j] = col; // input subarrays are never written: xorSorted always allocates
+        pivots.push(low);
         break;
       }
       col = xorSorted(col, reduced[o] as Int32Array);
     }
     if (onProgress && j % every === 0) onProgress(j / m.cols);
   }
-  return rank;
+  return { rank: pivots.length, pivotRows: Int32Array.from(pivots) };
 }
 
 /** Builds a SparseF2 from (row, col) pairs; repeated pairs cancel mod 2. O(E log E) */

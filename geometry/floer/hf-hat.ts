@@ -5,7 +5,7 @@
  * computes HF-hat(Y) ⊗ V^{k-g} with V of rank 2 (Manolescu–Ozsváth–Sarkar 2009, §2; Ozsváth–Szabó 2008).
  * Hot loop: per generator, the C(k,2) pairs of its points index the move table; no objects, no BigInt.
  */
-import { rankF2, sparseF2FromPairs } from '../algebra/f2.js';
+import { reduceF2, sparseF2FromPairs } from '../algebra/f2.js';
 import type { CombinatorialDiagram } from './combinatorics.js';
 import { curveIncidence, forEachGenerator } from './generators.js';
 import { domainLattice, type BlockedBasepoints, type DomainLattice } from './lattice.js';
@@ -43,15 +43,40 @@ export function generatorTable(comb: CombinatorialDiagram, count: number): Gener
   return { k, count: g, gens, codes, rankOf, radix };
 }
 
-/** Index of code in the ascending array, or -1. O(log n) */
-function findCode(codes: Float64Array, n: number, c: number): number {
-  let lo = 0, hi = n - 1;
-  while (lo <= hi) {
-    const mid = (lo + hi) >>> 1, v = codes[mid];
-    if (v === c) return mid;
-    if (v < c) lo = mid + 1; else hi = mid - 1;
+/**
+ * Open-addressing hash from generator code to index (linear probing, load <= 1/2). Codes are integers below
+ * 2^53; the hash mixes their low and high 32-bit halves. O(1) expected per lookup.
+ */
+export class CodeIndex {
+  private keys: Float64Array;
+  private vals: Int32Array;
+  private mask: number;
+  constructor(codes: Float64Array, n: number) {
+    let cap = 16;
+    while (cap < 2 * n) cap *= 2;
+    this.mask = cap - 1;
+    this.keys = new Float64Array(cap).fill(-1);
+    this.vals = new Int32Array(cap);
+    for (let i = 0; i < n; i++) {
+      let h = this.slot(codes[i]);
+      while (this.keys[h] >= 0) h = (h + 1) & this.mask;
+      this.keys[h] = codes[i]; this.vals[h] = i;
+    }
   }
-  return -1;
+  private slot(c: number): number {
+    const lo = c >>> 0, hi = (c / 4294967296) >>> 0;
+    return (Math.imul(lo ^ Math.imul(hi, 0x85ebca6b), 0x9e3779b1) >>> 0) & this.mask;
+  }
+  /** Index of code c, or -1. */
+  get(c: number): number {
+    let h = this.slot(c);
+    for (;;) {
+      const k = this.keys[h];
+      if (k === c) return this.vals[h];
+      if (k < 0) return -1;
+      h = (h + 1) & this.mask;
+    }
+  }
 }
 
 /** Growable pair of Int32 columns. */
@@ -70,6 +95,7 @@ class EdgeList {
 export function differentialEdges(T: GeneratorTable, M: MoveTable, P: number, alphaOf: Int32Array, onProgress?: (f: number) => void): EdgeList {
   const { k, count, gens, codes } = T;
   const edges = new EdgeList();
+  const index = new CodeIndex(codes, count);
   const PP = P * P;
   const every = Math.max(1, count >> 5);
   const emit = (g: number, x: Int32Array, key: number) => {
@@ -80,7 +106,7 @@ export function differentialEdges(T: GeneratorTable, M: MoveTable, P: number, al
         if (x[alphaOf[p]] === p) q += 2 * M.fixQ[f];
       }
       if (q !== 4) continue;
-      const y = findCode(codes, count, codes[g] + M.delta[m]);
+      const y = index.get(codes[g] + M.delta[m]);
       if (y >= 0) edges.push(g, y);
     }
   };
@@ -175,12 +201,30 @@ function blockHomology(n: number, E: EdgeList, CG: ClassesAndGradings, extra: nu
     rows[fill[b]] = local[E.tgt[e]]; cols[fill[b]++] = local[E.src[e]];
   }
   const rankOut = new Float64Array(nb), rankIn = new Float64Array(nb);
-  for (let b = 0; b < nb; b++) {
-    if (target[b] < 0) continue;
-    const s = eStart[b], e = eStart[b + 1];
-    const r = rankF2(sparseF2FromPairs(size[target[b]], size[b], rows.subarray(s, e), cols.subarray(s, e)));
-    rankOut[b] = r; rankIn[target[b]] += r;
-    progress(e / Math.max(1, E.n));
+  // Members of each block in generator order (local index order), for clearing (Chen–Kerber 2011).
+  const memStart = new Int32Array(nb + 1);
+  for (let b = 0; b < nb; b++) memStart[b + 1] = memStart[b] + size[b];
+  const members = new Int32Array(n);
+  for (let g = 0; g < n; g++) members[memStart[blockOf[g]] + local[g]] = g;
+  const cleared = new Uint8Array(n);
+  let done = 0;
+  for (let c = 0; c < nc; c++) {
+    const clearing = CG.modulus[c] === 0;
+    for (let gr = maxG[c]; gr >= minG[c]; gr--) {
+      const b = base[c] + gr - minG[c];
+      if (target[b] < 0) continue;
+      const s = eStart[b], e = eStart[b + 1], t = target[b];
+      let skipLocal: Uint8Array | null = null;
+      if (clearing) {
+        skipLocal = new Uint8Array(size[b]);
+        for (let i = 0; i < size[b]; i++) skipLocal[i] = cleared[members[memStart[b] + i]];
+      }
+      const red = reduceF2(sparseF2FromPairs(size[t], size[b], rows.subarray(s, e), cols.subarray(s, e)), skipLocal);
+      if (clearing) for (const r of red.pivotRows) cleared[members[memStart[t] + r]] = 1;
+      rankOut[b] = red.rank; rankIn[t] += red.rank;
+      done += e - s;
+      progress(done / Math.max(1, E.n));
+    }
   }
   return CG.roots.map((root, c) => {
     const byGrading: { grading: number; rawRank: number }[] = [];
