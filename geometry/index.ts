@@ -109,3 +109,7 @@ export { subdivideDiagram } from './construct/subdivide.js';
 export type { TwistOptions } from './construct/twist.js';
 export { dehnTwist, curveIndexByName } from './construct/twist.js';
 export { fingerMove } from './construct/finger.js';
+export type { SurfacePoint } from './construct/draw.js';
+export { shortestPath, addCurve, drawCurve, nearestCorner } from './construct/draw.js';
+export type { BasepointPlace } from './construct/curve-ops.js';
+export { deleteCurve, renameCurve, addBasepoint, moveBasepoint, removeBasepoint } from './construct/curve-ops.js';
