@@ -161,3 +161,15 @@ describe('combinatorial shadow', () => {
     for (const r of c.regions) expect(filled.get(r.id) ?? 0).toBe(r.corners);
   });
 });
+
+describe('defects', () => {
+  it('reports, never hides, a Gauss–Bonnet disagreement on a region (a collapsed edge breaks the angle sum π of its triangles)', () => {
+    const d = lensSpaceDiagram(2, 1, 4);
+    const v = d.basepoints[0].vertex, w = d.mesh.heVert[d.mesh.vertHe[v] + (d.mesh.vertHe[v] % 3 === 2 ? -2 : 1)];
+    for (let k = 0; k < 3; k++) d.mesh.pos[3 * v + k] = d.mesh.pos[3 * w + k]; // vertex v sits on its neighbour w
+    const a = analyse(d);
+    expect(a.defects.length).toBeGreaterThan(0);
+    expect(a.regions.some((r) => r.defect !== undefined)).toBe(true);
+    expect(a.defects[0].message).toMatch(/^region R_\d+: /);
+  });
+});

@@ -64,12 +64,16 @@ function curveVertices(m: DiagramInput['mesh'], L: CurveCheck['labels']): Int32A
 
 function checkDefects(a: DiagramAnalysis): void {
   for (const r of a.regions) {
+    const found: string[] = [];
     if (Math.abs(r.geometricEulerMeasure - r.eulerMeasure) > EULER_MEASURE_TOLERANCE) {
-      a.defects.push({ code: 'euler-measure-mismatch', message: `region ${r.id + 1}: the corner formula gives Euler measure ${r.eulerMeasure} but Gauss–Bonnet gives ${r.geometricEulerMeasure}` });
+      found.push(`the corner formula gives Euler measure ${r.eulerMeasure} but Gauss–Bonnet gives ${r.geometricEulerMeasure}`);
     }
     if (Math.abs(r.gaussBonnetChi - r.chi) > EULER_MEASURE_TOLERANCE) {
-      a.defects.push({ code: 'gauss-bonnet-mismatch', message: `region ${r.id + 1}: Euler characteristic ${r.chi} but its total curvature / 2π is ${r.gaussBonnetChi}` });
+      found.push(`its Euler characteristic is ${r.chi} but its total curvature / 2π is ${r.gaussBonnetChi}`);
     }
+    if (found.length === 0) continue;
+    r.defect = found.join('; ');
+    a.defects.push({ code: 'euler-measure-mismatch', message: `region R_${r.id + 1}: ${r.defect}` });
   }
   if (a.eulerMeasureTotal !== a.eulerCharacteristic) {
     a.defects.push({ code: 'euler-measure-total', message: `the Euler measures of the regions add up to ${a.eulerMeasureTotal}, not χ(Σ) = ${a.eulerCharacteristic}` });

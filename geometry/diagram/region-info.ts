@@ -52,6 +52,8 @@ export interface RegionInfo {
   smoothCurvature: number;
   /** Indices into the diagram's basepoints of those inside the region. */
   basepoints: number[];
+  /** Set when the two Euler measures (or Gauss–Bonnet and χ) disagree: a bug, reported, never hidden. */
+  defect?: string;
 }
 
 /**

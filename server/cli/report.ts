@@ -32,6 +32,8 @@ export interface ReportRegion {
   boundary: string[];
   /** Basepoint names inside, e.g. ['z_1']. */
   basepoints: string[];
+  /** Present only when the two Euler measures disagree (a defect, never hidden). */
+  defect?: string;
 }
 
 export interface AnalysisReport {
@@ -59,7 +61,7 @@ export const REPORT_SECTIONS: ((ctx: ReportContext) => Record<string, unknown>)[
   ({ combinatorial }) => floerReportFields(combinatorial),
 ];
 
-function regionReport(d: HeegaardDiagram, a: DiagramAnalysis, r: DiagramAnalysis['regions'][number]): ReportRegion {
+function regionReport(d: HeegaardDiagram, r: DiagramAnalysis['regions'][number]): ReportRegion {
   const bp = (i: number) => `${d.basepoints[i].kind}_${d.basepoints[i].index + 1}`;
   return {
     id: r.id + 1,
@@ -73,6 +75,7 @@ function regionReport(d: HeegaardDiagram, a: DiagramAnalysis, r: DiagramAnalysis
     curvature: { ...r.curvature },
     boundary: [...r.alphaCurves.map((i) => `alpha_${i + 1}`), ...r.betaCurves.map((i) => `beta_${i + 1}`)],
     basepoints: r.basepoints.map(bp),
+    ...(r.defect ? { defect: r.defect } : {}),
   };
 }
 
@@ -84,7 +87,7 @@ export function reportFromAnalysis(d: HeegaardDiagram, a: DiagramAnalysis): Anal
     beta: d.curves.filter((c) => c.family === 'beta').length,
     basepoints: a.basepoints.map((b) => ({ name: `${b.kind}_${b.index + 1}`, kind: b.kind, vertex: vertexLabel(d, b.vertex), region: b.region + 1 })),
     intersections: a.points.map((p, i) => ({ id: i + 1, vertex: p.label, alpha: p.alpha + 1, beta: p.beta + 1, sign: p.sign, quadrants: p.quadrants.map((r) => r + 1) })),
-    regions: a.regions.map((r) => regionReport(d, a, r)),
+    regions: a.regions.map((r) => regionReport(d, r)),
     eulerMeasureTotal: a.eulerMeasureTotal,
     defects: a.defects.map((p) => p.message),
   };
