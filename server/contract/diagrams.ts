@@ -344,7 +344,7 @@ export const regionSchema = z.object({
   reflexCorners: z.number().int(),
   eulerMeasure: z.number(),
   geometricEulerMeasure: z.number(),
-  /** Gauss–Bonnet parts in radians: interior defects, smooth boundary turning, corner terms. */
+  /** Gauss–Bonnet parts divided by 2π: interior defects, smooth boundary turning, corner terms (they sum to geometricEulerMeasure). */
   curvature: z.object({ interior: z.number(), boundary: z.number(), corners: z.number() }),
   /** geometricEulerMeasure − eulerMeasure; nonzero beyond rounding means a topology error. */
   difference: z.number(),
