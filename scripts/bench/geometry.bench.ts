@@ -6,7 +6,7 @@
  * Target: whole analysis ≤ 5x the baseline.
  */
 import {
-  analyzeDiagram, buildTriMesh, cornerAngle, gridDiagonal, gridMeridian, torusGrid, torusGridVertex, type HeegaardDiagram,
+  analyzeDiagram, buildTriMesh, checkCurves, cornerAngle, meshAngles, gridDiagonal, gridMeridian, torusGrid, torusGridVertex, type HeegaardDiagram,
 } from '../../geometry/index.js';
 import { memoryMB, row, timeIt, type BenchSuite } from './harness.js';
 
@@ -63,6 +63,11 @@ const suite: BenchSuite = {
     console.log(row('baseline: all corner angles', base.best, `median ${(base.median * 1000).toFixed(1)} ms`));
     console.log(row('connectivity (buildTriMesh)', build.best, `${(build.best / base.best).toFixed(2)}x baseline`));
     console.log(row('analysis after connectivity', analysisOnly, `${(analysisOnly / base.best).toFixed(2)}x baseline`));
+    const d = diagramOn(pos, tris);
+    const check = timeIt(() => checkCurves(d), 3);
+    const ang = timeIt(() => meshAngles(d.mesh), 3);
+    console.log(row('  of which curve labels, validation, regions', check.best, `${(check.best / base.best).toFixed(2)}x baseline`));
+    console.log(row('  of which corner angles and angle sums', ang.best, `${(ang.best / base.best).toFixed(2)}x baseline`));
     console.log(row('whole analysis (connectivity + all)', analyse.best, `${(analyse.best / base.best).toFixed(2)}x baseline (target <= 5x)`));
     console.log(`  result: ${a.points.length} intersection points, ${a.regions.length} regions, Σe = ${a.eulerMeasureTotal}, defects ${a.defects.length}`);
     const worst = Math.max(...a.regions.map((g) => Math.abs(g.geometricEulerMeasure - g.eulerMeasure)));

@@ -28,4 +28,4 @@ export function memoryMB(): { rss: number; heapUsed: number; arrayBuffers: numbe
 
 /** Aligned table row: label, seconds, note. */
 export const row = (label: string, seconds: number, note = ''): string =>
-  `  ${label.padEnd(38)} ${(seconds * 1000).toFixed(1).padStart(9)} ms  ${note}`;
+  `  ${label.padEnd(46)} ${(seconds * 1000).toFixed(1).padStart(9)} ms  ${note}`;

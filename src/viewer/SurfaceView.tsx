@@ -33,15 +33,16 @@ interface RigProps {
 
 /** Camera placement, fit/reset/orbit/zoom and face projection; fills `handle`. */
 function CameraRig({ sphere, surfaceRef, positions, triangles, handle }: RigProps) {
-  const { camera, gl, invalidate } = useThree();
+  const { camera, gl, invalidate, size } = useThree();
   const controls = useThree((s) => s.controls) as unknown as ControlsLike | null;
   const raycaster = useMemo(() => new THREE.Raycaster(), []);
   const placed = useRef<string>('');
 
   const fitDistance = useCallback(() => {
-    const fov = (camera as THREE.PerspectiveCamera).fov ?? 45;
-    return (sphere.radius / Math.sin((fov * Math.PI) / 360)) * 1.05;
-  }, [camera, sphere.radius]);
+    const vHalf = (((camera as THREE.PerspectiveCamera).fov ?? 40) * Math.PI) / 360;
+    const hHalf = Math.atan(Math.tan(vHalf) * (size.width / Math.max(1, size.height)));
+    return (sphere.radius / Math.sin(Math.min(vHalf, hHalf))) * 1.02;
+  }, [camera, sphere.radius, size.width, size.height]);
 
   const place = useCallback((dir: THREE.Vector3) => {
     const c = new THREE.Vector3(...sphere.center);
@@ -249,7 +250,7 @@ export default function SurfaceView(props: SurfaceViewProps) {
             <span
               key={p.id}
               ref={(el) => { if (el) labelEls.current.set(`p:${p.id}`, el); else labelEls.current.delete(`p:${p.id}`); }}
-              className="absolute left-0 top-0 whitespace-nowrap pl-2 pt-1 text-xs font-semibold"
+              className="absolute left-0 top-0 ml-2 mt-1 whitespace-nowrap rounded bg-white/75 px-1 text-[12px] font-semibold leading-4"
               style={{ visibility: 'hidden', color: p.kind === 'z' ? '#006b4f' : p.kind === 'w' ? '#9b4a7a' : palette.ink, textShadow: SUBTLE_TEXT_SHADOW }}
             >
               {p.label}
@@ -259,7 +260,7 @@ export default function SurfaceView(props: SurfaceViewProps) {
             <span
               key={c.id}
               ref={(el) => { if (el) labelEls.current.set(`c:${c.id}`, el); else labelEls.current.delete(`c:${c.id}`); }}
-              className="absolute left-0 top-0 whitespace-nowrap pl-2 text-sm font-bold"
+              className="absolute left-0 top-0 ml-2 whitespace-nowrap rounded bg-white/75 px-1 text-sm font-bold leading-5"
               style={{ visibility: 'hidden', color: c.family === 'alpha' ? palette.curveAlpha : '#a94700', textShadow: SUBTLE_TEXT_SHADOW }}
             >
               {c.label}

@@ -56,10 +56,10 @@ describe('viewer buffers', () => {
     expect(b[0]).toBeCloseTo(0.5); expect(b[1]).toBeCloseTo(0.25); expect(b[2]).toBeCloseTo(0.25);
   });
 
-  it('bounds the torus by a sphere through its box corners', () => {
+  it('bounds the torus of revolution by a sphere of radius R + r (do Carmo 1976)', () => {
     const s = boundingSphere(torus().positions);
     expect(s.center.map((c) => Math.abs(c) < 1e-6)).toEqual([true, true, true]);
-    expect(s.radius).toBeGreaterThan(2.7);
+    expect(s.radius).toBeCloseTo(2.7, 5);
   });
 });
 

@@ -87,7 +87,7 @@ export function maskedFaces(positions: Float32Array, triangles: Uint32Array, nor
   return out;
 }
 
-/** Centre and radius of the axis-aligned bounding box (radius = half its diagonal). O(V). */
+/** Centre of the axis-aligned bounding box and the largest distance of a vertex from it. O(V). */
 export function boundingSphere(positions: Float32Array): { center: [number, number, number]; radius: number } {
   if (positions.length < 3) return { center: [0, 0, 0], radius: 1 };
   const lo = [Infinity, Infinity, Infinity], hi = [-Infinity, -Infinity, -Infinity];
@@ -99,8 +99,12 @@ export function boundingSphere(positions: Float32Array): { center: [number, numb
     }
   }
   const center: [number, number, number] = [(lo[0] + hi[0]) / 2, (lo[1] + hi[1]) / 2, (lo[2] + hi[2]) / 2];
-  const radius = Math.hypot(hi[0] - lo[0], hi[1] - lo[1], hi[2] - lo[2]) / 2 || 1;
-  return { center, radius };
+  let r2 = 0;
+  for (let i = 0; i < positions.length; i += 3) {
+    const d = (positions[i] - center[0]) ** 2 + (positions[i + 1] - center[1]) ** 2 + (positions[i + 2] - center[2]) ** 2;
+    if (d > r2) r2 = d;
+  }
+  return { center, radius: Math.sqrt(r2) || 1 };
 }
 
 /** Mean edge length over all face edges (each interior edge counted twice; fine for a scale). O(F). */
