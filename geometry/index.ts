@@ -113,3 +113,6 @@ export type { SurfacePoint } from './construct/draw.js';
 export { shortestPath, addCurve, drawCurve, nearestCorner } from './construct/draw.js';
 export type { BasepointPlace } from './construct/curve-ops.js';
 export { deleteCurve, renameCurve, addBasepoint, moveBasepoint, removeBasepoint } from './construct/curve-ops.js';
+export { removeBigon } from './construct/bigon.js';
+export type { SmoothOptions } from './construct/smooth.js';
+export { smoothCurves } from './construct/smooth.js';
