@@ -63,7 +63,11 @@ async function main(): Promise<void> {
     process.exit(1);
   });
   console.log(`Quadrant is serving ${env.PUBLIC_ORIGIN} (listening on ${running.url})`);
+  let shuttingDown = false;
   const shutdown = (signal: string) => {
+    // A terminal Ctrl-C reaches us twice (directly and forwarded by npm start): act once.
+    if (shuttingDown) return;
+    shuttingDown = true;
     console.log(`${signal} received; shutting down`);
     const force = setTimeout(() => process.exit(1), 10_000);
     force.unref();
@@ -72,8 +76,8 @@ async function main(): Promise<void> {
       () => process.exit(1),
     );
   };
-  process.once('SIGINT', () => shutdown('SIGINT'));
-  process.once('SIGTERM', () => shutdown('SIGTERM'));
+  process.on('SIGINT', () => shutdown('SIGINT'));
+  process.on('SIGTERM', () => shutdown('SIGTERM'));
 }
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
