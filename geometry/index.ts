@@ -89,8 +89,8 @@ export type { GeneratorTable } from './floer/hf-hat.js';
 export { hfHatNice, generatorTable } from './floer/hf-hat.js';
 export type { ClassesAndGradings } from './floer/spinc-grading.js';
 export { classesAndGradings } from './floer/spinc-grading.js';
-export type { FloerSummary, FloerSummaryOptions } from './floer/summary.js';
-export { floerSummary, floerReportFields } from './floer/summary.js';
+export type { FloerSummary, FloerSummaryOptions, GeneratorGradings } from './floer/summary.js';
+export { floerSummary, floerReportFields, generatorGradings, findDomain } from './floer/summary.js';
 export type { GridMarking } from './floer/model-diagrams.js';
 export {
   combinatorialGrid, combinatorialGridS3, combinatorialKnotGrid, combinatorialLensSpace, combinatorialS1xS2,

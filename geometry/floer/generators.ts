@@ -127,6 +127,9 @@ export function generatorSign(comb: CombinatorialDiagram, x: ArrayLike<number>):
 export interface GeneratorEntry {
   points: number[];
   sign: 1 | -1;
+  /** Spin^c class label and relative grading, when gradings were passed to generatorsPage. */
+  spinc?: string;
+  grading?: number;
 }
 
 /** One page of the generator list. */
@@ -139,14 +142,23 @@ export interface GeneratorPage {
   more: boolean;
 }
 
-/** Generators offset .. offset+limit-1 in enumeration order. O((offset + limit) * k) */
-export function generatorsPage(comb: CombinatorialDiagram, offset: number, limit: number): GeneratorPage {
+/**
+ * Generators offset .. offset+limit-1 in enumeration order, with class labels and gradings when `gradings`
+ * (from generatorGradings, same diagram) is given. O((offset + limit) * k)
+ */
+export function generatorsPage(
+  comb: CombinatorialDiagram, offset: number, limit: number,
+  gradings?: { classOf: Int32Array; grading: Int32Array; labels: string[] },
+): GeneratorPage {
   const out: GeneratorEntry[] = [];
   let seen = 0, more = false;
   forEachGenerator(comb, (x) => {
     if (seen++ < offset) return true;
     if (out.length >= limit) { more = true; return false; }
-    out.push({ points: Array.from(x), sign: generatorSign(comb, x) });
+    const e: GeneratorEntry = { points: Array.from(x), sign: generatorSign(comb, x) };
+    const g = seen - 1;
+    if (gradings && g < gradings.classOf.length) { e.spinc = gradings.labels[gradings.classOf[g]]; e.grading = gradings.grading[g]; }
+    out.push(e);
     return true;
   });
   const total = countGenerators(comb);

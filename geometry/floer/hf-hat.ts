@@ -130,7 +130,9 @@ export function differentialEdges(T: GeneratorTable, M: MoveTable, P: number, al
 export interface SpincHomology {
   /** Class id (0-based, in order of first generator). */
   spinc: number;
-  /** Index of the class's first generator (the grading origin). */
+  /** ε(first generator of this class, generator 0) in Smith coordinates: "0", "(2 mod 5)", ... */
+  label: string;
+  /** Index of the class's first generator in enumeration order. */
   root: number;
   generators: number;
   /** Rank of the complex's homology (HF-hat ⊗ V^{k-g} when multi-pointed). */
@@ -139,7 +141,7 @@ export interface SpincHomology {
   rank: number | null;
   /** 0 for an integer (torsion) grading; otherwise gradings are mod this number. */
   gradingModulus: number;
-  /** Raw ranks by relative grading (gr(root) = 0), non-zero entries only, ascending. */
+  /** Raw ranks by relative grading (lowest generator grading 0), non-zero entries only, ascending. */
   byGrading: { grading: number; rawRank: number }[];
 }
 
@@ -236,6 +238,6 @@ function blockHomology(n: number, E: EdgeList, CG: ClassesAndGradings, extra: nu
       if (h > 0) byGrading.push({ grading: gr, rawRank: h });
       raw += h;
     }
-    return { spinc: c, root, generators: gens, rawRank: raw, rank: raw % 2 ** extra === 0 ? raw / 2 ** extra : null, gradingModulus: CG.modulus[c], byGrading };
+    return { spinc: c, label: CG.labels[c], root, generators: gens, rawRank: raw, rank: raw % 2 ** extra === 0 ? raw / 2 ** extra : null, gradingModulus: CG.modulus[c], byGrading };
   });
 }

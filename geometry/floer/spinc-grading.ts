@@ -13,10 +13,18 @@ import { classInvariant, type DomainLattice } from './lattice.js';
 export interface ClassesAndGradings {
   /** Class id per generator (0-based, in order of first appearance). */
   classOf: Int32Array;
-  /** Relative grading per generator: gr(x) - gr(root of its class), reduced mod the class modulus when non-zero. */
+  /**
+   * Relative grading per generator: gr(x) - gr(lowest generator of its class), so the lowest is 0; reduced to
+   * [0, modulus) when the class modulus is non-zero.
+   */
   grading: Int32Array;
-  /** Per class: index of its root generator. */
+  /** Per class: index of its root generator (its first generator in the given order). */
   roots: number[];
+  /**
+   * Per class: ε(root, first generator) in coker J_0 coordinates from the Smith form (Ozsváth–Szabó 2004,
+   * §2.4: ε(x, y) = 0 iff a domain exists): "0" for the class of the first generator, else e.g. "(2 mod 5)".
+   */
+  labels: string[];
   /** Per class: grading modulus (0 = integer grading, torsion class). */
   modulus: number[];
 }
@@ -65,6 +73,7 @@ export function classesAndGradings(L: DomainLattice, gens: Int32Array, count: nu
   const keyToClass = new Map<string, number>();
   const roots: number[] = [], modulus: number[] = [];
   const rootData: { base: number; rowCol: Float64Array }[] = [];
+  const labels: string[] = [];
   const scale4 = 4 * L.scale;
   for (let g = 0; g < count; g++) {
     const x = gens.subarray(g * k, g * k + k);
@@ -83,6 +92,7 @@ export function classesAndGradings(L: DomainLattice, gens: Int32Array, count: nu
       roots.push(g);
       modulus.push(classModulus(comb, L, x));
       rootData.push(rootTables(x, E, NQ, P));
+      labels.push(g === 0 ? '0' : classLabel(L, tmp, first));
     }
     classOf[g] = cls;
     const rd = rootData[cls];
@@ -98,7 +108,26 @@ export function classesAndGradings(L: DomainLattice, gens: Int32Array, count: nu
     if (mod) gr = ((gr % mod) + mod) % mod;
     grading[g] = gr;
   }
-  return { classOf, grading, roots, modulus };
+  normalize(classOf, grading, modulus);
+  return { classOf, grading, roots, modulus, labels };
+}
+
+/** Shifts integer-graded classes so their lowest generator has grading 0. O(count) */
+function normalize(classOf: Int32Array, grading: Int32Array, modulus: number[]): void {
+  const min = new Array<number>(modulus.length).fill(Infinity);
+  for (let g = 0; g < classOf.length; g++) if (grading[g] < min[classOf[g]]) min[classOf[g]] = grading[g];
+  for (let g = 0; g < classOf.length; g++) if (!modulus[classOf[g]]) grading[g] -= min[classOf[g]];
+}
+
+/** "(a mod d, b)" from the obstruction coordinates that differ from the first generator's. */
+function classLabel(L: DomainLattice, v: Float64Array, first: Float64Array): string {
+  const parts: string[] = [];
+  for (let t = 0; t < v.length; t++) {
+    const d = L.obsMod[t];
+    const diff = d ? (((v[t] - first[t]) % d) + d) % d : v[t] - first[t];
+    if (diff !== 0) parts.push(d ? `${diff} mod ${d}` : String(diff));
+  }
+  return `(${parts.join(', ')})`;
 }
 
 /** For root r: base = Σ_{p∈r} E[p] + Σ_{q,p∈r} NQ[q,p]; rowCol[p] = Σ_{q∈r} NQ[q,p] - Σ_{p'∈r} NQ[p,p']. */

@@ -8,7 +8,10 @@ import type { CombinatorialDiagram } from './combinatorics.js';
 import { countGenerators } from './generators.js';
 import { hfHatNice, type SpincHomology } from './hf-hat.js';
 import { firstHomology, type H1Summary } from './homology-h1.js';
-import { blockedRegions, domainLattice, type BlockedBasepoints, type DomainLattice } from './lattice.js';
+import { blockedRegions, domainBetween, domainLattice, type BlockedBasepoints, type DomainLattice } from './lattice.js';
+import { byAlpha, generatorProblem } from './domains.js';
+import { generatorTable } from './hf-hat.js';
+import { classesAndGradings } from './spinc-grading.js';
 import { isNice, type NotNiceRegion } from './nice-moves.js';
 
 export interface FloerSummaryOptions {
@@ -26,8 +29,13 @@ export interface FloerSummary {
   /** Number of generators (perm N, Ryser 1963) as a decimal string; null when k is too large to count. */
   generators: string | null;
   h1: H1Summary;
-  /** Number of independent periodic domains (rank of the periodic lattice, b_1 for k = g). */
+  /**
+   * Number of independent periodic domains avoiding the blocked basepoints: b_1(Y) when k = g; multi-pointed
+   * diagrams add k - g more (e.g. row minus column annuli of a grid) [derived].
+   */
   periodicDomains: number;
+  /** A basis of the periodic domains in Hermite echelon form, one integer per region each. */
+  periodicDomainBasis: number[][];
   /** null when undecided (elimination too large). */
   weaklyAdmissible: boolean | null;
   /** A non-zero periodic domain with all coefficients of one sign (one integer per region). */
@@ -70,7 +78,8 @@ export function floerSummary(comb: CombinatorialDiagram, options: FloerSummaryOp
   }
   const niceR = isNice(comb, blockedRegions(comb, blocked));
   const out: FloerSummary = {
-    generators: count === null ? null : count.toString(), h1, periodicDomains, weaklyAdmissible,
+    generators: count === null ? null : count.toString(), h1, periodicDomains,
+    periodicDomainBasis: lattice ? lattice.periodic.map((p) => Array.from(p)) : [], weaklyAdmissible,
     nice: niceR.nice, hfHat: null,
   };
   if (offending) out.offendingPeriodicDomain = offending;
@@ -97,6 +106,7 @@ export function floerReportFields(comb: CombinatorialDiagram, options: FloerSumm
     generators: s.generators,
     h1: s.h1,
     periodicDomains: s.periodicDomains,
+    periodicDomainBasis: s.periodicDomainBasis,
     weaklyAdmissible: s.weaklyAdmissible,
     ...(s.offendingPeriodicDomain ? { offendingPeriodicDomain: s.offendingPeriodicDomain } : {}),
     nice: s.nice,
@@ -104,4 +114,45 @@ export function floerReportFields(comb: CombinatorialDiagram, options: FloerSumm
     hfHat: s.hfHat,
     ...(s.hfHatReason ? { hfHatReason: s.hfHatReason } : {}),
   };
+}
+
+/** Spin^c class and relative grading of every generator, consistent with floerSummary's bySpinc. */
+export interface GeneratorGradings {
+  classOf: Int32Array;
+  grading: Int32Array;
+  labels: string[];
+  modulus: number[];
+}
+
+/**
+ * Classes (Ozsváth–Szabó 2004, §2.6) and relative Maslov gradings of all generators, indexed in enumeration
+ * order; null with a reason when there are more than `generatorLimit` generators or exact arithmetic outgrows
+ * doubles. O(#generators · k (k + #obstructions)).
+ */
+export function generatorGradings(comb: CombinatorialDiagram, options: FloerSummaryOptions = {}): GeneratorGradings | { reason: string } {
+  const limit = options.generatorLimit ?? 2_000_000;
+  const count = countGenerators(comb);
+  if (count === null || count > BigInt(limit)) return { reason: `${count ?? 'too many'} generators exceed the limit of ${limit}` };
+  try {
+    const L = domainLattice(comb, options.blocked ?? 'z');
+    const T = generatorTable(comb, Number(count));
+    const CG = classesAndGradings(L, T.gens, T.count);
+    return { classOf: CG.classOf, grading: CG.grading, labels: CG.labels, modulus: CG.modulus };
+  } catch (e) {
+    if (e instanceof RangeError) return { reason: `exact arithmetic outgrew this build: ${e.message}` };
+    throw e;
+  }
+}
+
+/** A domain from x to y with n_z = 0 (one integer per region), or the reason there is none. O(R k) after the lattice. */
+export function findDomain(comb: CombinatorialDiagram, x: number[], y: number[], blocked: BlockedBasepoints = 'z'): { domain: number[] } | { reason: string } {
+  for (const [g, name] of [[x, 'x'], [y, 'y']] as const) {
+    const p = generatorProblem(comb, g, name);
+    if (p) return { reason: p };
+  }
+  let L: DomainLattice;
+  try { L = domainLattice(comb, blocked); } catch { return { reason: 'the domain lattice is too large for exact arithmetic in this build' }; }
+  const d = domainBetween(L, byAlpha(comb, x), byAlpha(comb, y));
+  if (!d) return { reason: 'x and y lie in different spin^c classes: no domain from x to y avoids the basepoints' };
+  return { domain: Array.from(d) };
 }

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import {
   cokernel, combinatorialGridS3, combinatorialLensSpace, combinatorialS1xS2, countGenerators, curveIncidence,
-  firstHomology, forEachGenerator, generators, generatorSign, generatorsPage, permanent,
+  firstHomology, forEachGenerator, generators, generatorSign, generatorsPage, permanent, generatorGradings, findDomain, checkDomain,
 } from '../../geometry/index.js';
 
 describe('generator counts: the permanent of N (REFERENCE.md; Ryser 1963)', () => {
@@ -71,4 +71,36 @@ describe('signs and H_1 (REFERENCE.md: signed count = ±det M, |χ(HF-hat)| = |H
       expect(firstHomology(c)).toMatchObject({ rank: 0, torsion: [], order: '1' });
     });
   }
+});
+
+describe('generator gradings and pages with spin^c labels', () => {
+  it('labels the p generators of L(p,q) by p different classes, the first "0" (Ozsváth–Szabó 2004)', () => {
+    const g = generatorGradings(combinatorialLensSpace(5, 2));
+    if ('reason' in g) throw new Error(g.reason);
+    expect(new Set(g.labels).size).toBe(5);
+    expect(g.labels[0]).toBe('0');
+    const page = generatorsPage(combinatorialLensSpace(5, 2), 0, 5, g);
+    expect(new Set(page.generators.map((x) => x.spinc)).size).toBe(5);
+    expect(page.generators.every((x) => x.grading === 0)).toBe(true);
+  });
+
+  it('puts the two generators of S^1 x S^2 in one class with gradings 0 and 1 (the bigons have μ = 1; Lipshitz 2006)', () => {
+    const g = generatorGradings(combinatorialS1xS2());
+    if ('reason' in g) throw new Error(g.reason);
+    expect(Array.from(g.classOf)).toEqual([0, 0]);
+    expect(Array.from(g.grading)).toEqual([1, 0]); // a -> b by a bigon: gr(a) - gr(b) = 1
+  });
+
+  it('refuses more generators than the limit with a reason', () => {
+    expect(generatorGradings(combinatorialGridS3(8), { generatorLimit: 1000 })).toEqual({ reason: '40320 generators exceed the limit of 1000' });
+  });
+});
+
+describe('findDomain (Ozsváth–Szabó 2004, §2.4)', () => {
+  it('finds a bigon-like domain between the S^1 x S^2 generators and none between lens space generators', () => {
+    const d = findDomain(combinatorialS1xS2(), [0], [1]);
+    expect('domain' in d && checkDomain(combinatorialS1xS2(), d.domain, { from: [0], to: [1] }).isDomain).toBe(true);
+    expect(findDomain(combinatorialLensSpace(5, 2), [0], [1])).toEqual({ reason: expect.stringContaining('different spin^c classes') });
+    expect(findDomain(combinatorialLensSpace(5, 2), [0, 1], [1])).toEqual({ reason: expect.stringContaining('x has 2 points') });
+  });
 });

@@ -42,7 +42,7 @@ describe('the 5x5 trefoil grid (MOS 2009; REFERENCE.md check values)', () => {
     for (const cls of s.hfHat!.bySpinc) {
       const root = abs[cls.root];
       for (const { grading, rawRank } of cls.byGrading) {
-        const key = `${root.m + grading},${root.a}`;
+        const key = `${root.m + grading - CG.grading[cls.root]},${root.a}`;
         tilde.set(key, (tilde.get(key) ?? 0) + rawRank);
       }
     }
