@@ -47,7 +47,7 @@ function resolveCrossing(em: EditMesh, c: number, B: number, CH: number, negativ
   return true;
 }
 
-/** Walks the union of edges labelled with any id in `ids` from half-edge h0 and relabels it `target`. */
+/** Walks the union of edges labelled with any id in `ids` from half-edge h0 (each vertex on it has exactly two) and relabels it `target` in walking direction. */
 function mergeInto(em: EditMesh, ids: Set<number>, target: number, h0: number): boolean {
   const v0 = em.heVert[h0];
   let h = h0;
@@ -58,7 +58,7 @@ function mergeInto(em: EditMesh, ids: Set<number>, target: number, h0: number): 
     const back = em.heTwin[h];
     let nextH = -1, count = 0;
     for (const g of fan(em, w)) {
-      if (g !== back && ids.has(Math.abs(em.heCurve[g])) && em.heCurve[g] !== -target) { nextH = g; count++; }
+      if (g !== back && ids.has(Math.abs(em.heCurve[g]))) { nextH = g; count++; }
     }
     if (count !== 1) return false;
     h = nextH;
@@ -113,8 +113,14 @@ export function dehnTwist(d: HeegaardDiagram, curve: number, along: number, opti
       }
     }
   }
+  // Start on an edge of b outside the twisting collar (an original edge, unsplit), so b' keeps b's direction
+  // there; inside the collar b' may run along pieces of b backwards when î(a, b) counts opposite signs.
   let h0 = -1;
-  for (let h = 0; h < 3 * em.nF && h0 < 0; h++) if (em.heCurve[h] === B) h0 = h;
+  const bv = bc.vertices;
+  for (let i = 0; i < bv.length && h0 < 0; i++) {
+    const h = findHalfEdge(em, bv[i], bv[(i + 1) % bv.length]);
+    if (h >= 0 && em.heCurve[h] === B) h0 = h;
+  }
   if (h0 < 0 || !mergeInto(em, ids, B, h0)) return fail({ code: 'internal-twist', message: `the twisted ${curveName(bc)} did not close up; this is a bug in Quadrant` });
   for (let h = 0; h < 3 * em.nF; h++) {
     if (Math.abs(em.heCurve[h]) > n) return fail({ code: 'internal-twist', message: `the twisted ${curveName(bc)} fell into several pieces; this is a bug in Quadrant` });

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { analyzeDiagram, toCombinatorial, type HeegaardDiagram } from '../../geometry/index.js';
+import fc from 'fast-check';
 import { firstHomology } from '../../geometry/floer/homology-h1.js';
+import { floerSummary } from '../../geometry/index.js';
 import { buildTemplate } from '../../geometry/construct/templates.js';
 import { curveIndexByName, dehnTwist } from '../../geometry/construct/twist.js';
 
@@ -84,5 +86,43 @@ describe('Dehn twist', () => {
     expect(curveIndexByName(d, 'alpha_1')).toBe(0);
     expect(curveIndexByName(d, 'beta_1')).toBe(1);
     expect(curveIndexByName(d, 'beta_2')).toBe(-1);
+  });
+
+  // A twist along an alpha curve extends over the alpha handlebody, so (Σ, α, T_a(β)) presents the same
+  // 3-manifold (Farb–Margalit 2012, ch. 3; Ozsváth–Szabó 2004: HF-hat is a 3-manifold invariant).
+  for (const [name, spec, rank, h1] of [
+    ['#^1 S^1 x S^2', { kind: 's1xs2', genus: 1 }, 2, 1],
+    ['#^2 S^1 x S^2', { kind: 's1xs2', genus: 2 }, 4, 2],
+    ['genus-2 S^3', { kind: 's3', genus: 2 }, 1, 0],
+  ] as const) {
+    it(`keeps HF-hat of rank ${rank} and H_1 of rank ${h1} when beta_1 of ${name} is twisted along alpha_1, even with intersection signs of both kinds (Ozsváth–Szabó 2004)`, () => {
+      const d = unwrap(buildTemplate(spec));
+      for (const negative of [false, true]) {
+        const t = unwrap(dehnTwist(d, curveIndexByName(d, 'beta_1'), curveIndexByName(d, 'alpha_1'), { negative }));
+        const a = unwrap(analyzeDiagram(t));
+        expect(a.defects).toEqual([]);
+        const f = floerSummary(toCombinatorial(a));
+        expect(f.h1.rank).toBe(h1);
+        expect(f.hfHat?.rank).toBe(rank);
+      }
+    });
+  }
+
+  it('keeps H_1(S^3) = 0 under random sequences of twists between the families of the genus-2 S^3 diagram (property test; Farb–Margalit 2012, ch. 3)', () => {
+    const d0 = unwrap(buildTemplate({ kind: 's3', genus: 2, resolution: 2 }));
+    const names = ['alpha_1', 'alpha_2', 'beta_1', 'beta_2'];
+    fc.assert(fc.property(fc.array(fc.tuple(fc.nat(3), fc.nat(1), fc.boolean()), { minLength: 1, maxLength: 3 }), (ops) => {
+      let d = d0;
+      for (const [c, i, negative] of ops) {
+        const curve = names[c], along = (curve.startsWith('alpha') ? 'beta_' : 'alpha_') + (i + 1);
+        const r = dehnTwist(d, curveIndexByName(d, curve), curveIndexByName(d, along), { negative });
+        if (!r.ok) { expect(r.errors[0].code).toBe('twist-would-meet'); continue; }
+        d = r.value;
+      }
+      const a = unwrap(analyzeDiagram(d));
+      expect(a.defects).toEqual([]);
+      const h = firstHomology(toCombinatorial(a));
+      expect([h.rank, h.torsion.length]).toEqual([0, 0]);
+    }), { numRuns: 12, seed: 11 });
   });
 });
