@@ -56,7 +56,7 @@ export function aptInstall(pkgs) {
   const lock = ['-o', 'DPkg::Lock::Timeout=900'];
   let code = runSync('apt-get', [...lock, 'update'], { env, stdio: ['ignore', 'inherit', 'inherit'] });
   if (code !== 0) return code;
-  code = runSync('apt-get', [...lock, 'install', '-y', '--no-install-recommends', ...pkgs], {
+  code = runSync('apt-get', [...lock, 'install', '-y', ...pkgs], {
     env,
     stdio: ['ignore', 'inherit', 'inherit'],
   });
