@@ -363,31 +363,44 @@ export type PeriodicDomain = z.infer<typeof periodicDomainSchema>;
 
 export const gradingRankSchema = z.object({ grading: z.number().int(), rank: z.number().int() });
 export const spincHomologySchema = z.object({
-  /** Name of the spin^c class (its element of H_1, e.g. "0", "3 ∈ Z/5"). */
+  /** Name of the spin^c class: ε(first generator of the class, generator 0), e.g. "0", "(2 mod 5)". */
   spinc: z.string(),
   generators: z.number().int(),
-  rank: z.number().int(),
-  /** Relative gradings within the class, normalized so the lowest generator grading is 0. */
+  /** Rank of HF-hat in this class; null when the multi-pointed factor does not divide (knot grids). */
+  rank: z.number().int().nullable(),
+  /** Rank of the complex's homology (HF-hat ⊗ V^{k−g} when multi-pointed; Manolescu–Ozsváth–Sarkar 2009). */
+  rawRank: z.number().int(),
+  /** 0: integer relative grading; otherwise gradings are mod this number. */
+  gradingModulus: z.number().int(),
+  /** Raw ranks by relative grading (lowest generator grading 0), non-zero entries, ascending. */
   byGrading: z.array(gradingRankSchema),
 });
+export type SpincHomologyRow = z.infer<typeof spincHomologySchema>;
+export const notNiceRegionSchema = z.object({ region: z.number().int(), corners: z.number().int(), chi: z.number().int() });
 export const floerSummarySchema = z.object({
-  generatorCount: z.string(),
+  /** perm N of the intersection counts (decimal string); null when too many curves to count. */
+  generatorCount: z.string().nullable(),
+  /** "0", "Z/5", "Z^2 ⊕ Z/3" (Ozsváth–Szabó 2004: H_1(Y) = coker of the intersection matrix). */
   h1: z.string(),
   b1: z.number().int(),
   /** Torsion coefficients d_i > 1 of H_1. */
   torsion: z.array(z.number().int()),
+  /** |H_1| when finite, decimal string. */
+  h1Order: z.string().nullable(),
+  /** A basis of the periodic domains (avoiding the z basepoints). */
   periodicDomains: z.array(periodicDomainSchema),
-  weaklyAdmissible: z.boolean(),
-  /** A nonzero periodic domain with no negative (or no positive) coefficient, when not admissible. */
+  /** Null when undecided (too many periodic domains). */
+  weaklyAdmissible: z.boolean().nullable(),
+  /** A nonzero periodic domain with all coefficients of one sign, when not admissible. */
   admissibilityWitness: periodicDomainSchema.nullable(),
   nice: z.boolean(),
   /** Regions without a basepoint that are neither bigons nor squares (Sarkar–Wang 2010). */
-  notNiceRegions: z.array(z.number().int()),
+  notNiceRegions: z.array(notNiceRegionSchema),
   /** HF-hat by spin^c class, or null with homologyUnavailable giving the reason. */
-  homology: z.object({ rank: z.number().int(), bySpinc: z.array(spincHomologySchema) }).nullable(),
+  homology: z.object({ rank: z.number().int(), rawRank: z.number().int(), bySpinc: z.array(spincHomologySchema) }).nullable(),
   homologyUnavailable: z.string().nullable(),
-  /** Whether the generators endpoint can list generators (false past the enumeration limit). */
-  generatorsListed: z.boolean(),
+  /** Whether the generators endpoint gives spin^c classes and gradings (false past the limit). */
+  generatorsClassified: z.boolean(),
 });
 export type FloerSummary = z.infer<typeof floerSummarySchema>;
 

@@ -93,7 +93,7 @@ export function analyzeForApi(d: HeegaardDiagram, progress: ProgressFn = () => u
   }));
   const comb = toCombinatorial(a);
   progress(0.5, 'floer');
-  const floer = computeFloer(comb, FLOER_LIMITS);
+  const floer = computeFloer(comb, FLOER_LIMITS, (f) => progress(0.5 + 0.45 * f, 'floer'));
   progress(0.95, 'packing');
   const result: AnalysisResult = {
     stats: surfaceStatsOf(d, a, faceArea),

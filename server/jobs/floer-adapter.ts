@@ -1,21 +1,133 @@
 /**
- * The Floer part of an analysis: the geometry core's floerSummary mapped onto the contract's FloerSummary.
- * Large generator enumerations are refused with a reason (the limits below), never attempted.
+ * The Floer part of an analysis and of generator pages: the geometry core's floerSummary (Ozsváth–Szabó
+ * 2004; Sarkar–Wang 2010) mapped onto the contract. Large generator enumerations are refused with a reason
+ * (the limits below), never attempted.
  */
-import type { CombinatorialDiagram } from '../../geometry/index.js';
-import type { FloerSummary } from '../contract/diagrams.js';
+import {
+  classesAndGradings, domainLattice, floerSummary, generatorTable, generatorsPage, countGenerators,
+  type CombinatorialDiagram,
+} from '../../geometry/index.js';
+import type { FloerSummary, GeneratorsPageResponse } from '../contract/diagrams.js';
 
-/** Limits handed to floerSummary. */
 export const FLOER_LIMITS = {
-  /** Most generators the homology computation enumerates. */
+  /** Most generators the HF-hat computation enumerates (in the worker). */
   maxGenerators: 200_000,
+  /** Most generators a generators page classifies by spin^c and grading (on request, cached). */
+  maxClassifiedGenerators: 50_000,
 };
 
 export type FloerOutcome = { ok: true; summary: FloerSummary } | { ok: false; reason: string };
 
-/** Placeholder until floerSummary lands in geometry/index.ts. */
-export function computeFloer(comb: CombinatorialDiagram, limits: typeof FLOER_LIMITS): FloerOutcome {
-  void comb;
-  void limits;
-  return { ok: false, reason: 'The Floer computations are not available in this build.' };
+/** "0", "Z", "Z/5", "Z^2 ⊕ Z/3" from rank and torsion. */
+export function h1Text(rank: number, torsion: readonly (number | bigint)[]): string {
+  const parts: string[] = [];
+  if (rank === 1) parts.push('Z');
+  else if (rank > 1) parts.push(`Z^${rank}`);
+  for (const t of torsion) parts.push(`Z/${t}`);
+  return parts.length ? parts.join(' ⊕ ') : '0';
+}
+
+function periodicBasis(comb: CombinatorialDiagram): number[][] {
+  try {
+    return domainLattice(comb, 'z').periodic.map((p) => Array.from(p));
+  } catch (e) {
+    if (e instanceof RangeError) return [];
+    throw e;
+  }
+}
+
+/** Runs floerSummary and maps it. Never throws for user data. */
+export function computeFloer(comb: CombinatorialDiagram, limits = FLOER_LIMITS, onProgress?: (f: number) => void): FloerOutcome {
+  if (comb.curveCount === 0) return { ok: false, reason: 'The diagram has no alpha and beta curves yet.' };
+  try {
+    const s = floerSummary(comb, { generatorLimit: limits.maxGenerators, onProgress });
+    const count = s.generators === null ? null : BigInt(s.generators);
+    const summary: FloerSummary = {
+      generatorCount: s.generators,
+      h1: h1Text(s.h1.rank, s.h1.torsion),
+      b1: s.h1.rank,
+      torsion: s.h1.torsion.map(Number),
+      h1Order: s.h1.order,
+      periodicDomains: periodicBasis(comb).map((coefficients) => ({ coefficients })),
+      weaklyAdmissible: s.weaklyAdmissible,
+      admissibilityWitness: s.offendingPeriodicDomain ? { coefficients: s.offendingPeriodicDomain } : null,
+      nice: s.nice,
+      notNiceRegions: (s.notNiceRegions ?? []).map((r) => ({ region: r.region, corners: r.corners, chi: r.chi })),
+      homology: s.hfHat
+        ? {
+          rank: s.hfHat.rank,
+          rawRank: s.hfHat.rawRank,
+          bySpinc: s.hfHat.bySpinc.map((c) => ({
+            spinc: c.label, generators: c.generators, rank: c.rank, rawRank: c.rawRank, gradingModulus: c.gradingModulus,
+            byGrading: c.byGrading.map((g) => ({ grading: g.grading, rank: g.rawRank })),
+          })),
+        }
+        : null,
+      homologyUnavailable: s.hfHat ? null : (s.hfHatReason ?? 'not computed'),
+      generatorsClassified: count !== null && count <= BigInt(limits.maxClassifiedGenerators),
+    };
+    return { ok: true, summary };
+  } catch (e) {
+    return { ok: false, reason: `The Floer computations stopped: ${e instanceof Error ? e.message : String(e)}` };
+  }
+}
+
+interface Classified {
+  k: number;
+  gens: Int32Array;
+  spinc: string[];
+  classOf: Int32Array;
+  grading: Int32Array;
+}
+const classifiedCache = new Map<string, Classified | null>();
+const CACHE_SIZE = 8;
+
+/** All generators with class and grading, or null past the limit / when the lattice is out of range. */
+function classifyAll(cacheKey: string, comb: CombinatorialDiagram, limit: number): Classified | null {
+  if (classifiedCache.has(cacheKey)) {
+    const hit = classifiedCache.get(cacheKey)!;
+    classifiedCache.delete(cacheKey);
+    classifiedCache.set(cacheKey, hit);
+    return hit;
+  }
+  let out: Classified | null = null;
+  const count = countGenerators(comb);
+  if (count !== null && count <= BigInt(limit)) {
+    try {
+      const table = generatorTable(comb, Number(count));
+      const L = domainLattice(comb, 'z');
+      const cg = classesAndGradings(L, table.gens, table.count);
+      out = { k: table.k, gens: table.gens, spinc: cg.labels, classOf: cg.classOf, grading: cg.grading };
+    } catch (e) {
+      if (!(e instanceof RangeError)) throw e;
+    }
+  }
+  classifiedCache.set(cacheKey, out);
+  while (classifiedCache.size > CACHE_SIZE) classifiedCache.delete(classifiedCache.keys().next().value as string);
+  return out;
+}
+
+/**
+ * One page of generators in enumeration order, with spin^c class and relative grading when the count is
+ * within maxClassifiedGenerators (computed once per revision and kept in a small LRU). O(count · k^2) the
+ * first time, O(limit · k) after.
+ */
+export function generatorsPageFor(cacheKey: string, comb: CombinatorialDiagram, offset: number, limit: number, limits = FLOER_LIMITS): GeneratorsPageResponse {
+  const all = classifyAll(cacheKey, comb, limits.maxClassifiedGenerators);
+  const page = generatorsPage(comb, offset, limit);
+  return {
+    total: page.total ?? 'unknown',
+    offset,
+    limit,
+    generators: page.generators.map((g, i) => {
+      const idx = offset + i;
+      return {
+        index: idx,
+        points: g.points,
+        sign: g.sign,
+        spinc: all ? all.spinc[all.classOf[idx]] : null,
+        grading: all ? all.grading[idx] : null,
+      };
+    }),
+  };
 }
