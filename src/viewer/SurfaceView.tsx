@@ -110,6 +110,24 @@ function CameraRig({ sphere, surfaceRef, positions, triangles, handle }: RigProp
   return null;
 }
 
+/** The tooltip keeps its own state so pointer moves re-render only it, not the scene. */
+function Tooltip({ setter, render }: { setter: React.RefObject<(p: ViewerPick | null) => void>; render: (p: ViewerPick) => React.ReactNode }) {
+  const [pick, setPick] = useState<ViewerPick | null>(null);
+  useEffect(() => { setter.current = setPick; return () => { setter.current = () => {}; }; }, [setter]);
+  if (!pick) return null;
+  const content = render(pick);
+  if (!content) return null;
+  return (
+    <div
+      role="tooltip"
+      className="pointer-events-none fixed z-20 max-w-xs rounded-md border border-line bg-surface px-3 py-2 text-xs text-ink shadow-lg"
+      style={{ left: pick.clientX + 14, top: pick.clientY + 14 }}
+    >
+      {content}
+    </div>
+  );
+}
+
 const SUBTLE_TEXT_SHADOW = '0 0 3px #fff, 0 0 3px #fff, 0 0 2px #fff';
 
 export default function SurfaceView(props: SurfaceViewProps) {
@@ -124,7 +142,7 @@ export default function SurfaceView(props: SurfaceViewProps) {
   const surfaceRef = useRef<THREE.Mesh | null>(null);
   const handle = useRef<SurfaceViewHandle | null>(null);
   const labelEls = useRef(new Map<string, HTMLElement>());
-  const [hover, setHover] = useState<ViewerPick | null>(null);
+  const setTooltip = useRef<(p: ViewerPick | null) => void>(() => {});
   const hoverKey = useRef('');
   const instructionsId = useId();
 
@@ -137,7 +155,7 @@ export default function SurfaceView(props: SurfaceViewProps) {
   }), []);
 
   const report = useCallback((pick: ViewerPick | null) => {
-    setHover(pick);
+    setTooltip.current(pick);
     const k = pick ? (pick.kind === 'face' ? `f${pick.face}` : `p${pick.id}`) : '';
     if (k !== hoverKey.current) { hoverKey.current = k; onHover?.(pick); }
   }, [onHover]);
@@ -268,15 +286,7 @@ export default function SurfaceView(props: SurfaceViewProps) {
           ))}
         </div>
       )}
-      {hover && renderTooltip && (
-        <div
-          role="tooltip"
-          className="pointer-events-none fixed z-20 max-w-xs rounded-md border border-line bg-surface px-3 py-2 text-xs text-ink shadow-lg"
-          style={{ left: hover.clientX + 14, top: hover.clientY + 14 }}
-        >
-          {renderTooltip(hover)}
-        </div>
-      )}
+      {renderTooltip && <Tooltip setter={setTooltip} render={renderTooltip} />}
     </div>
   );
 }

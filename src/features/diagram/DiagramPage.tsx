@@ -311,7 +311,7 @@ export default function DiagramPage() {
             ) : tab === 'points' ? (
               <PointsPanel intersections={result.intersections} hover={hover} selected={selected} onHover={setHover} onSelect={setSelected} />
             ) : tab === 'generators' ? (
-              <GeneratorsPanel diagramId={diagramId} revision={rev!} listed={floer?.generatorsListed ?? false} total={floer?.generatorCount ?? null} onShow={setGenerator} shown={generator} />
+              <GeneratorsPanel diagramId={diagramId} revision={rev!} listed={Boolean(floer)} total={floer?.generatorCount ?? null} onShow={setGenerator} shown={generator} />
             ) : tab === 'domains' ? (
               <DomainsPanel diagramId={diagramId} revision={rev!} regions={result.regions} domain={domain} onChange={setDomain} canEdit={canEdit}
                 hover={hover} selected={selected} onHover={setHover} />

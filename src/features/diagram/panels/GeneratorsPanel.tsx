@@ -21,7 +21,7 @@ export function GeneratorsPanel({ diagramId, revision, listed, total, onShow, sh
   const [offset, setOffset] = useState(0);
   const page = useGenerators(diagramId, revision, offset, PAGE, listed);
   if (!listed) {
-    return <p className="text-sm text-ink-muted">There are {total ?? 'too many'} generators: too many to list. The counts and the homology summary still apply.</p>;
+    return <p className="text-sm text-ink-muted">Generators are not available for this revision{total ? ` (${total} in all)` : ''}; see Homology for the reason.</p>;
   }
   if (page.error) return <p role="alert" className="text-sm text-danger">{errorMessage(page.error)}</p>;
   if (!page.data) return <p className="flex items-center gap-2 text-sm text-ink-muted"><Spinner size={14} /> Loading generators…</p>;
@@ -41,6 +41,7 @@ export function GeneratorsPanel({ diagramId, revision, listed, total, onShow, sh
           <tr>
             <th scope="col" className="px-2 py-1.5 text-right">#</th>
             <th scope="col" className="px-2 py-1.5">Points</th>
+            <th scope="col" className="px-2 py-1.5 text-right">Sign</th>
             <th scope="col" className="px-2 py-1.5">Spin^c class</th>
             <th scope="col" className="px-2 py-1.5 text-right">Relative grading</th>
           </tr>
@@ -57,7 +58,8 @@ export function GeneratorsPanel({ diagramId, revision, listed, total, onShow, sh
                     {generatorText(g.points)}
                   </button>
                 </th>
-                <td className="px-2 py-1 font-mono">{g.spinc}</td>
+                <td className="px-2 py-1 text-right tabular-nums">{g.sign > 0 ? '+' : '−'}</td>
+                <td className="px-2 py-1 font-mono">{g.spinc ?? '—'}</td>
                 <td className="px-2 py-1 text-right tabular-nums">{g.grading ?? '—'}</td>
               </tr>
             );

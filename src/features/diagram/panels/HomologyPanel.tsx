@@ -12,7 +12,8 @@ export interface HomologyPanelProps {
   showing: string | null;
 }
 
-function YesNo({ ok, yes, no }: { ok: boolean; yes: string; no: string }) {
+function YesNo({ ok, yes, no }: { ok: boolean | null; yes: string; no: string }) {
+  if (ok === null) return <span className="text-ink-muted">Undecided (too many periodic domains)</span>;
   return <span className={ok ? 'font-semibold text-ok' : 'font-semibold text-danger'}>{ok ? yes : no}</span>;
 }
 
@@ -23,6 +24,7 @@ function YesNo({ ok, yes, no }: { ok: boolean; yes: string; no: string }) {
 export function HomologyPanel({ floer, unavailable, onShowPeriodic, onShowRegions, showing }: HomologyPanelProps) {
   if (!floer) return <p className="text-sm text-ink-muted">{unavailable ?? 'The Floer summary is not available for this revision.'}</p>;
   const gradings = [...new Set(floer.homology?.bySpinc.flatMap((s) => s.byGrading.map((g) => g.grading)) ?? [])].sort((a, b) => b - a);
+  const modulus = floer.homology?.bySpinc.find((s) => s.gradingModulus > 0)?.gradingModulus ?? 0;
   const support = (c: number[]) => c.map((v, r) => (v !== 0 ? r : -1)).filter((r) => r >= 0);
   return (
     <div className="flex flex-col gap-4 text-sm">
@@ -32,7 +34,8 @@ export function HomologyPanel({ floer, unavailable, onShowPeriodic, onShowRegion
         <dt className="text-ink-muted">b₁</dt>
         <dd>{floer.b1}</dd>
         <dt className="text-ink-muted">Generators</dt>
-        <dd className="tabular-nums">{floer.generatorCount}</dd>
+        <dd className="tabular-nums">{floer.generatorCount ?? 'too many to count'}</dd>
+        {floer.h1Order && <><dt className="text-ink-muted">|H₁(Y)|</dt><dd className="tabular-nums">{floer.h1Order}</dd></>}
         <dt className="text-ink-muted">Weakly admissible</dt>
         <dd className="flex flex-wrap items-center gap-2">
           <YesNo ok={floer.weaklyAdmissible} yes="Yes" no="No" />
@@ -52,9 +55,9 @@ export function HomologyPanel({ floer, unavailable, onShowPeriodic, onShowRegion
           <YesNo ok={floer.nice} yes="Yes — every region without a basepoint is a bigon or a square" no="No" />
           {floer.notNiceRegions.length > 0 && (
             <>
-              <span className="text-ink-muted">({floer.notNiceRegions.map(regionLabel).join(', ')})</span>
+              <span className="text-ink-muted">({floer.notNiceRegions.map((r) => `${regionLabel(r.region)}: ${r.corners} corners, χ = ${r.chi}`).join('; ')})</span>
               <Button size="sm" variant="secondary" aria-pressed={showing === 'not-nice'}
-                onClick={() => { if (showing === 'not-nice') { onShowRegions(null); onShowPeriodic(null); } else { onShowPeriodic(null); onShowRegions(floer.notNiceRegions); } }}>
+                onClick={() => { if (showing === 'not-nice') { onShowRegions(null); onShowPeriodic(null); } else { onShowPeriodic(null); onShowRegions(floer.notNiceRegions.map((r) => r.region)); } }}>
                 {showing === 'not-nice' ? 'Hide' : 'Show on the surface'}
               </Button>
             </>
@@ -86,15 +89,21 @@ export function HomologyPanel({ floer, unavailable, onShowPeriodic, onShowRegion
           <p className="text-ink-muted">{floer.homologyUnavailable ?? 'Not computed.'}</p>
         ) : (
           <>
-            <p className="mb-2">Total rank <span className="font-semibold tabular-nums" data-testid="hf-rank">{floer.homology.rank}</span></p>
+            <p className="mb-2">
+              Total rank <span className="font-semibold tabular-nums" data-testid="hf-rank">{floer.homology.rank}</span>
+              {floer.homology.rawRank !== floer.homology.rank && (
+                <span className="text-ink-muted"> (the complex has rank {floer.homology.rawRank}: HF-hat ⊗ V for the extra basepoints, Manolescu–Ozsváth–Sarkar 2009)</span>
+              )}
+            </p>
             <div className="overflow-x-auto">
               <table className="border-collapse text-xs" aria-label="HF-hat rank by spin^c class and relative grading">
+                <caption className="caption-bottom pt-1 text-left text-ink-faint">Ranks by relative grading are of the complex’s homology (raw).</caption>
                 <thead className="bg-sunken text-ink-muted">
                   <tr>
                     <th scope="col" className="px-2 py-1.5 text-left">Spin^c class</th>
                     <th scope="col" className="px-2 py-1.5 text-right">Generators</th>
                     <th scope="col" className="px-2 py-1.5 text-right">Rank</th>
-                    {gradings.map((g) => <th key={g} scope="col" className="px-2 py-1.5 text-right">gr {g}</th>)}
+                    {gradings.map((g) => <th key={g} scope="col" className="px-2 py-1.5 text-right">gr {g}{modulus ? ` mod ${modulus}` : ''}</th>)}
                   </tr>
                 </thead>
                 <tbody>
@@ -102,7 +111,7 @@ export function HomologyPanel({ floer, unavailable, onShowPeriodic, onShowRegion
                     <tr key={s.spinc} className="border-t border-line">
                       <th scope="row" className="px-2 py-1 text-left font-mono font-medium">{s.spinc}</th>
                       <td className="px-2 py-1 text-right tabular-nums">{s.generators}</td>
-                      <td className="px-2 py-1 text-right font-semibold tabular-nums">{s.rank}</td>
+                      <td className="px-2 py-1 text-right font-semibold tabular-nums">{s.rank ?? `${s.rawRank} (raw)`}</td>
                       {gradings.map((g) => {
                         const r = s.byGrading.find((b) => b.grading === g)?.rank ?? 0;
                         return <td key={g} className={`px-2 py-1 text-right tabular-nums ${r ? '' : 'text-ink-faint'}`}>{r || '·'}</td>;
