@@ -73,13 +73,14 @@ export function AppShell() {
       </main>
       {!fullWidth && (
         <footer className="border-t border-line">
-          <div className="mx-auto flex max-w-6xl items-center justify-between px-4 py-5 text-xs text-ink-faint sm:px-6">
+          <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-x-6 gap-y-2 px-4 py-5 text-xs text-ink-faint sm:px-6">
             <span>Quadrant — Heegaard diagrams on triangulated surfaces</span>
-            <span className="flex items-center gap-3" aria-label="Curve colours">
-              <span className="inline-flex items-center gap-1.5">
+            <span className="flex shrink-0 items-center gap-3">
+              <span className="sr-only">Curve colours:</span>
+              <span className="inline-flex items-center gap-1.5 whitespace-nowrap">
                 <span aria-hidden="true" className="h-0.5 w-4 rounded bg-curve-alpha" />α curves
               </span>
-              <span className="inline-flex items-center gap-1.5">
+              <span className="inline-flex items-center gap-1.5 whitespace-nowrap">
                 <span aria-hidden="true" className="h-0.5 w-4 rounded bg-curve-beta" />β curves
               </span>
             </span>

@@ -103,6 +103,18 @@ describe('the foundation in a browser', () => {
     await s.screenshot('foundation-focus-ring');
   });
 
+  it('fits a phone screen without sideways scrolling', async () => {
+    await s.page.setViewportSize({ width: 390, height: 844 });
+    await s.page.goto(s.url('/workspaces'));
+    await s.page.getByRole('link', { name: new RegExp(DEMO_WORKSPACE_NAME) }).click();
+    await s.page.getByRole('link', { name: 'Members' }).click();
+    await s.page.getByRole('table', { name: /Members of/ }).waitFor();
+    const overflow = await s.page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+    expect(overflow).toBeLessThanOrEqual(0);
+    await s.screenshot('foundation-members-phone');
+    await s.page.setViewportSize({ width: 1280, height: 860 });
+  });
+
   it('signs out from the user menu', async () => {
     await s.page.goto(s.url('/workspaces'));
     await s.page.getByRole('button', { name: `Account: ${DEMO_USERS.owner.name}` }).click();

@@ -104,7 +104,7 @@ export default function MembersTab() {
   const leaving = removing?.userId === me?.id;
 
   return (
-    <div className="grid gap-10 lg:grid-cols-[1fr_22rem]">
+    <div className="grid grid-cols-1 gap-10 lg:grid-cols-[minmax(0,1fr)_22rem]">
       <section aria-labelledby="members-title" className="flex min-w-0 flex-col gap-4">
         <div className="flex items-baseline justify-between gap-4">
           <h2 id="members-title" className="text-xl font-semibold">
@@ -120,8 +120,8 @@ export default function MembersTab() {
         {members.isError && <QueryError error={members.error} what="the members" onRetry={() => members.refetch()} />}
         {members.data && members.data.members.length === 0 && <EmptyState title="No members" />}
         {members.data && members.data.members.length > 0 && (
-          <div className="overflow-x-auto rounded-[var(--radius-card)] border border-line bg-surface">
-            <table className="w-full text-left text-sm">
+          <div className="relative overflow-x-auto rounded-[var(--radius-card)] border border-line bg-surface">
+            <table className="w-full min-w-[34rem] text-left text-sm">
               <caption className="sr-only">Members of {workspace.name} and their roles</caption>
               <thead className="bg-sunken text-xs uppercase tracking-wide text-ink-muted">
                 <tr>
@@ -152,7 +152,8 @@ export default function MembersTab() {
                             value={m.role}
                             disabled={updateRole.isPending}
                             onChange={(e) => updateRole.mutate({ userId: m.userId, role: e.target.value as Role })}
-                            className="h-9 w-32"
+                            containerClassName="w-32"
+                            className="h-9"
                           />
                         ) : (
                           <RoleBadge role={m.role} />

@@ -59,7 +59,7 @@ export default function WorkspacesPage() {
         title="Workspaces"
         description={user ? `Signed in as ${user.name}. Each workspace keeps its own diagrams and members.` : undefined}
       />
-      <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
+      <div className="grid grid-cols-1 gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <section aria-labelledby="your-workspaces">
           <h2 id="your-workspaces" className="sr-only">
             Your workspaces
