@@ -63,11 +63,11 @@ function pick(sys: Ineq[], v: number, val: Frac[]): Frac {
 }
 
 /**
- * A non-zero periodic domain with all coefficients >= 0 (offending weak admissibility), null when none exists
- * (weakly admissible), or 'undecided' when elimination exceeds `cap` constraints. Coefficients are in the given
- * basis's region numbering.
+ * Fourier–Motzkin version of nonNegativePeriodic (exponential in b; kept as an independent cross-check for
+ * small b): a non-zero periodic domain with all coefficients >= 0, null when none exists, or 'undecided' when
+ * elimination exceeds `cap` constraints.
  */
-export function nonNegativePeriodic(basis: Int32Array[], cap = 200_000): Int32Array | null | 'undecided' {
+export function nonNegativePeriodicFM(basis: Int32Array[], cap = 200_000): Int32Array | null | 'undecided' {
   const b = basis.length;
   if (b === 0) return null;
   const R = basis[0].length;

@@ -3,7 +3,7 @@
  * niceness and, for nice admissible diagrams of sane size, HF-hat with its spin^c splitting and relative
  * gradings. Each part cites its source in its own file.
  */
-import { nonNegativePeriodic } from './admissibility.js';
+import { nonNegativePeriodic } from './admissibility-lp.js';
 import type { CombinatorialDiagram } from './combinatorics.js';
 import { countGenerators } from './generators.js';
 import { hfHatNice, type SpincHomology } from './hf-hat.js';
