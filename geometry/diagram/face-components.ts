@@ -36,7 +36,7 @@ export function faceComponents(m: TriMesh, heCurve: Int32Array, familyBit: Uint8
       size++;
       for (let h = 3 * f; h < 3 * f + 3; h++) {
         const c = heCurve[h];
-        if (c !== 0 && (familyBit[(c < 0 ? -c : c) - 1] & mask) !== 0) continue;
+        if (c !== 0 && (mask === 3 || (familyBit[(c < 0 ? -c : c) - 1] & mask) !== 0)) continue;
         const t = twin[h];
         if (t < 0) continue;
         const g = (t / 3) | 0;
