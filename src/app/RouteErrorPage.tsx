@@ -5,24 +5,28 @@ import { ApiDownPage } from './ApiDownPage';
 import { NotFoundPage } from './NotFoundPage';
 
 /**
- * Route-level error boundary (the router's errorElement). Shows 404s as the not-found page, an unreachable
+ * Route-level error boundary (`inShell`: rendered inside the signed-in layout, keeping its header) (the router's errorElement). Shows 404s as the not-found page, an unreachable
  * API as the full-page retry state, a failed lazy chunk as "reload", and anything else as a calm message.
  */
-export function RouteErrorPage() {
+export function RouteErrorPage({ inShell = false }: { inShell?: boolean }) {
   const error = useRouteError();
+  // Inside the app shell the header stays and the shell already provides <main>.
+  const Frame = inShell ? 'section' : 'main';
   if ((isRouteErrorResponse(error) && error.status === 404) || hasStatus(error, 404)) {
     return (
-      <main id="main" className="px-6">
+      <Frame id={inShell ? undefined : 'main'} className="px-6">
         <NotFoundPage />
-      </main>
+      </Frame>
     );
   }
-  if (isApiUnreachable(error)) return <ApiDownPage onRetry={() => window.location.reload()} />;
+  if (isApiUnreachable(error) && !inShell) return <ApiDownPage onRetry={() => window.location.reload()} />;
   const chunkFailed = error instanceof Error && /dynamically imported module|Failed to fetch|Importing a module script failed/i.test(error.message);
   return (
-    <main id="main" className="mx-auto max-w-xl px-6 py-20 text-center">
+    <Frame id={inShell ? undefined : 'main'} className="mx-auto max-w-xl px-6 py-20 text-center">
       <div role="alert">
-        <h1 className="text-2xl font-semibold tracking-tight">{chunkFailed ? 'Quadrant was updated' : 'Something went wrong on this page'}</h1>
+        <h1 className="text-2xl font-semibold tracking-tight">
+          {chunkFailed ? 'Quadrant was updated' : isApiUnreachable(error) ? 'Quadrant’s server is not answering' : 'Something went wrong on this page'}
+        </h1>
         <p className="mt-3 text-ink-muted">
           {chunkFailed
             ? 'A part of the app could not be loaded, probably because a new version was published. Reloading fixes it.'
@@ -37,6 +41,6 @@ export function RouteErrorPage() {
           Reload the page
         </Button>
       </div>
-    </main>
+    </Frame>
   );
 }

@@ -52,6 +52,7 @@ export function createAppRouter() {
           children: [
             {
               element: <RequireAuth />,
+              errorElement: <RouteErrorPage inShell />,
               children: [
                 { path: '/workspaces', element: <WorkspacesPage /> },
                 {
