@@ -186,8 +186,9 @@ function straightWalk(em: EditMesh, A: number, B: number, id: number, used: Set<
 
 /**
  * Cuts the mesh along a closed polyline of surface points (at least 3, on the diagram's mesh) and makes it
- * a new curve of `family`. Each segment is a straight walk across faces; where that fails it follows the
- * shortest edge path instead. Refusals: the curve touches its own family, runs along or is tangent to the
+ * a new curve of `family`. Each segment is a straight walk across faces (points snap to free vertices
+ * within 15% and to edges within 5% of a face); a segment the walk cannot follow is refused with its two
+ * end vertices (draw points closer together). Refusals: the curve touches its own family, runs along or is tangent to the
  * other family, crosses itself, or passes a basepoint — each with the vertex.
  */
 export function drawCurve(d: HeegaardDiagram, family: CurveFamily, points: SurfacePoint[]): Result<HeegaardDiagram> {

@@ -7,7 +7,12 @@ import type { HeegaardDiagram } from '../diagram/types.js';
 import { gridDiagram, lensDiagram, s1xs2TorusDiagram, torusCurveDiagram } from './torus-templates.js';
 import { genusS1xS2Diagram, genusS3Diagram } from './genus-templates.js';
 
-/** What to build. `resolution` refines the mesh (meaning per kind; defaults are chosen to look smooth). */
+/**
+ * What to build. `resolution` refines the mesh; defaults look smooth:
+ * - lens, torus-curve, s3/s1xs2 of genus 1: grid steps around the torus in the shorter direction, 8..512 (32);
+ * - grid: grid steps per cell, even, 2..32 (4);
+ * - s3, s1xs2 of genus >= 2: Catmull–Clark smoothing level 1..4 (3 up to genus 3, else 2).
+ */
 export type TemplateSpec =
   | { kind: 'lens'; p: number; q: number; resolution?: number }
   | { kind: 'torus-curve'; p: number; q: number; resolution?: number }

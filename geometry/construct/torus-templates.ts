@@ -89,6 +89,7 @@ export function lensDiagram(p: number, q: number, resolution?: number): Result<H
 
 /** Genus-1 S^1 x S^2: alpha the meridian, beta an isoline u = g(v) that wiggles across it twice (two bigons). */
 export function s1xs2TorusDiagram(resolution = 32): Result<HeegaardDiagram> {
+  if (!isInt(resolution) || resolution < 8 || resolution > 512) return bad('bad-parameter', 'resolution must be a whole number from 8 to 512');
   const nu = 2 * resolution, nv = resolution, o = { nu, nv };
   const mesh = torusMesh(nu, nv);
   const alpha = Array.from({ length: nv }, (_, j) => torusGridVertex(o, 0, j));
