@@ -59,7 +59,7 @@ export interface ConnectivityReport {
 export function buildTriMesh(pos: Float64Array, tris: ArrayLike<number>): { mesh: TriMesh; report: ConnectivityReport } {
   const nV = (pos.length / 3) | 0;
   const nH = tris.length;
-  const heVert = Int32Array.from(tris as ArrayLike<number>);
+  const heVert = new Int32Array(tris as ArrayLike<number>);
   const start = new Int32Array(nV + 1);
   for (let h = 0; h < nH; h++) start[heVert[h] + 1]++;
   for (let v = 0; v < nV; v++) start[v + 1] += start[v];
