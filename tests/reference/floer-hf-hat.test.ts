@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import {
   analyzeDiagram, combinatorialDisjointCircles, combinatorialGridS3, combinatorialKnotGrid, combinatorialLensSpace,
-  combinatorialS1xS2, floerSummary, gridDiagram, lensDiagram, s1xs2TorusDiagram, toCombinatorial,
+  combinatorialS1xS2, floerSummary, gridDiagram, lensDiagram, s1xs2TorusDiagram, toCombinatorial, buildTemplate,
+  fingerMove, torusGridVertex,
   type CombinatorialDiagram, type HeegaardDiagram, type Result,
 } from '../../geometry/index.js';
 
@@ -101,5 +102,35 @@ describe('tilde grid homology of knots (REFERENCE.md grid check values; MOS 2009
     const s = floerSummary(combinatorialKnotGrid([1, 2, 3, 4, 0], [4, 0, 1, 2, 3]), { blocked: 'all' });
     expect(s.generators).toBe('120');
     expect(s.hfHat?.rawRank).toBe(48);
+  });
+});
+
+describe('a finger move on the genus-1 diagram of S^3', () => {
+  const fingered = (): CombinatorialDiagram => {
+    const d = buildTemplate({ kind: 's3', genus: 1 });
+    if (!d.ok) throw new Error('template failed');
+    const g = (i: number, j: number) => torusGridVertex({ nu: 64, nv: 32 }, i, j); // resolution-32 torus
+    const f = fingerMove(d.value, 1, [g(3, 16), g(3, 17), g(2, 17), g(1, 17), g(0, 17), g(-1, 17), g(-2, 17)]);
+    return fromMesh(f.ok ? f.value : (() => { throw new Error('finger move failed'); })());
+  };
+
+  it('adds a cancelling pair: 3 generators, HF-hat still of rank 1 (Ozsváth–Szabó 2004, isotopy invariance)', () => {
+    const s = floerSummary(fingered());
+    expect(s.generators).toBe('3');
+    expect(s.hfHat?.rank).toBe(1);
+  });
+
+  it('is not nice once the basepoint sits in a bigon: the octagon is listed and HF-hat is refused (Sarkar–Wang 2010)', () => {
+    const c = fingered();
+    const octagon = c.regions.findIndex((r) => r.corners === 8), bigon = c.regions.findIndex((r) => r.corners === 2);
+    const moved: CombinatorialDiagram = {
+      ...c,
+      regions: c.regions.map((r, i) => ({ ...r, basepoints: i === bigon ? [0] : i === octagon ? [] : r.basepoints })),
+    };
+    const s = floerSummary(moved);
+    expect(s.nice).toBe(false);
+    expect(s.notNiceRegions).toEqual([{ region: octagon, corners: 8, chi: 1 }]);
+    expect(s.hfHat).toBeNull();
+    expect(s.hfHatReason).toContain('not nice');
   });
 });
