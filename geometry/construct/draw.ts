@@ -29,10 +29,14 @@ export function nearestCorner(mesh: TriMesh, p: SurfacePoint): number {
 
 /**
  * Shortest path along mesh edges (Dijkstra 1959, edge lengths) between two vertices or surface points
- * (snapped to their nearest corner). `blocked(v)` vertices are never entered (the ends excepted).
+ * (snapped to their nearest corner). `blocked(v)` vertices are never entered (the ends excepted), nor
+ * `blockedEdge(h)` half-edges followed.
  * Returns the vertex list from start to end, or null if unreachable. O((V + E) log V).
  */
-export function shortestPath(mesh: TriMesh, from: number | SurfacePoint, to: number | SurfacePoint, blocked?: (v: number) => boolean): number[] | null {
+export function shortestPath(
+  mesh: TriMesh, from: number | SurfacePoint, to: number | SurfacePoint,
+  blocked?: (v: number) => boolean, blockedEdge?: (h: number) => boolean,
+): number[] | null {
   const s = typeof from === 'number' ? from : nearestCorner(mesh, from);
   const t = typeof to === 'number' ? to : nearestCorner(mesh, to);
   if (!(s >= 0 && s < mesh.nV && t >= 0 && t < mesh.nV)) return null;
@@ -48,7 +52,7 @@ export function shortestPath(mesh: TriMesh, from: number | SurfacePoint, to: num
     let h = first;
     do {
       const w = mesh.heVert[next(h)];
-      if (w === t || !blocked || !blocked(w)) {
+      if ((w === t || !blocked || !blocked(w)) && !(blockedEdge && blockedEdge(h))) {
         const nd = dv + len(mesh.pos, v, w);
         if (nd < dist[w]) { dist[w] = nd; prevV[w] = v; heap.push(w, nd); }
       }
@@ -145,8 +149,7 @@ function insertPoint(em: EditMesh, P: number[], used: Set<number>): number {
  * Walks straight from vertex A toward vertex B, splitting each crossed edge (GEOMETRY.md "Path insertion"),
  * labelling the path with `id`. Returns the vertices after A up to B, or null when the straight walk fails.
  */
-function straightWalk(em: EditMesh, A: number, B: number, id: number, used: Set<number>): number[] | null {
-  const out: number[] = [];
+function straightWalk(em: EditMesh, A: number, B: number, id: number, used: Set<number>, out: number[]): boolean {
   const p = em.pos;
   let cur = A;
   for (let step = 0; step < 4000; step++) {
@@ -154,7 +157,7 @@ function straightWalk(em: EditMesh, A: number, B: number, id: number, used: Set<
     if (hB >= 0) {
       if (em.heCurve[hB] === 0) setEdgeLabel(em, hB, id);
       out.push(B);
-      return out;
+      return true;
     }
     const d = [0, 1, 2].map((k) => p[3 * B + k] - p[3 * cur + k]);
     let pick = -1, pickS = 0, pickQ = -Infinity;
@@ -168,9 +171,9 @@ function straightWalk(em: EditMesh, A: number, B: number, id: number, used: Set<
       const q = Math.min(al, be) / (Math.abs(al) + Math.abs(be) + 1e-300);
       if (q > pickQ) { pickQ = q; pick = h; pickS = be / (al + be); }
     }
-    if (pick < 0 || pickQ < -1e-9) return null;
+    if (pick < 0 || pickQ < -1e-9) return false;
     const e = next(pick), x = em.heVert[e], y = em.heVert[next(e)];
-    if (Math.abs(em.heCurve[e]) === id) return null;
+    if (Math.abs(em.heCurve[e]) === id) return false;
     let nxt: number;
     if (pickS < 0.1 && !onCurve(em, x) && !used.has(x)) nxt = x;
     else if (pickS > 0.9 && !onCurve(em, y) && !used.has(y)) nxt = y;
@@ -179,16 +182,39 @@ function straightWalk(em: EditMesh, A: number, B: number, id: number, used: Set<
     used.add(nxt);
     out.push(nxt);
     cur = nxt;
-    if (cur === B) return out;
+    if (cur === B) return true;
   }
-  return null;
+  return false;
+}
+
+/**
+ * One segment of a drawn curve: the straight walk, or — when it fails — the partial walk is unlabelled and
+ * replaced by the shortest edge path avoiding the curve so far and every curve edge. Returns the vertices
+ * after A up to B, or null.
+ */
+function segment(em: EditMesh, A: number, B: number, id: number, used: Set<number>): number[] | null {
+  const out: number[] = [];
+  if (straightWalk(em, A, B, id, used, out)) return out;
+  let prevV = A;
+  for (const v of out) {
+    const h = findHalfEdge(em, prevV, v);
+    if (h >= 0 && Math.abs(em.heCurve[h]) === id) setEdgeLabel(em, h, 0);
+    if (v !== B) used.delete(v);
+    prevV = v;
+  }
+  const path = shortestPath(em, A, B, (v) => used.has(v) && v !== B, (h) => em.heCurve[h] !== 0);
+  if (!path) return null;
+  for (let i = 0; i + 1 < path.length; i++) setEdgeLabel(em, findHalfEdge(em, path[i], path[i + 1]), id);
+  for (const v of path) used.add(v);
+  return path.slice(1);
 }
 
 /**
  * Cuts the mesh along a closed polyline of surface points (at least 3, on the diagram's mesh) and makes it
  * a new curve of `family`. Each segment is a straight walk across faces (points snap to free vertices
- * within 15% and to edges within 5% of a face); a segment the walk cannot follow is refused with its two
- * end vertices (draw points closer together). Refusals: the curve touches its own family, runs along or is tangent to the
+ * within 15% and to edges within 5% of a face); where the walk fails, the segment follows the shortest edge
+ * path that avoids the curve so far and all curve edges, and is refused (with its two end vertices) when
+ * there is none. Refusals: the curve touches its own family, runs along or is tangent to the
  * other family, crosses itself, or passes a basepoint — each with the vertex.
  */
 export function drawCurve(d: HeegaardDiagram, family: CurveFamily, points: SurfacePoint[]): Result<HeegaardDiagram> {
@@ -217,9 +243,9 @@ export function drawCurve(d: HeegaardDiagram, family: CurveFamily, points: Surfa
   const cycle: number[] = [verts[0]];
   for (let i = 0; i < verts.length; i++) {
     const A = cycle[cycle.length - 1], B = verts[(i + 1) % verts.length];
-    const seg = straightWalk(em, A, B, id, used);
+    const seg = segment(em, A, B, id, used);
     if (!seg) {
-      return fail({ code: 'curve-cannot-cut', message: `could not cut the surface from vertex ${wsLabel(ws, A)} to vertex ${wsLabel(ws, B)} in a straight line; add points closer together`, vertices: [wsLabel(ws, A), wsLabel(ws, B)] });
+      return fail({ code: 'curve-cannot-cut', message: `could not join vertex ${wsLabel(ws, A)} to vertex ${wsLabel(ws, B)} without running into the curve drawn so far or along another curve; add points closer together`, vertices: [wsLabel(ws, A), wsLabel(ws, B)] });
     }
     cycle.push(...seg);
   }
