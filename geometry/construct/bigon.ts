@@ -56,8 +56,8 @@ function sector(em: EditMesh, v: number, from: number, to: number, inR: (f: numb
 export function removeBigon(d: HeegaardDiagram, region: number): Result<HeegaardDiagram> {
   const an = analyzeDiagram(d);
   if (!an.ok) return an;
-  const a = an.value, R = a.regions.find((r) => r.id === region);
-  if (!R) return fail({ code: 'unknown-region', message: `there is no region ${region + 1}` });
+  const a = an.value, R = Number.isInteger(region) ? a.regions.find((r) => r.id === region) : undefined;
+  if (!R) return fail({ code: 'unknown-region', message: `there is no region ${Number.isInteger(region) ? region + 1 : String(region)}` });
   if (R.chi !== 1 || R.corners.length !== 2) return fail({ code: 'not-a-bigon', message: `region ${region + 1} is not a bigon (it has ${R.corners.length} corners and Euler characteristic ${R.chi})` });
   if (R.basepoints.length) return fail({ code: 'bigon-not-empty', message: `region ${region + 1} holds a basepoint; removing it would move a curve across the basepoint` });
   const [px, py] = R.corners.map((c) => a.points[c.point]);

@@ -6,7 +6,7 @@
 import { fail, type Result } from '../base/result.js';
 import { splitFace } from '../mesh/edit.js';
 import { curveName, type BasepointKind, type CurveFamily, type HeegaardDiagram } from '../diagram/types.js';
-import { closeDiagram, openDiagram, wsLabel } from './labels.js';
+import { closeDiagram, isIndex, openDiagram, wsLabel } from './labels.js';
 import { onCurve } from './paths.js';
 import type { SurfacePoint } from './draw.js';
 
@@ -14,7 +14,7 @@ const badCurve = (d: HeegaardDiagram, c: number): Result<never> => fail({ code: 
 
 /** Removes curve number `curve`; later curves of its family move down one index. */
 export function deleteCurve(d: HeegaardDiagram, curve: number): Result<HeegaardDiagram> {
-  if (!(curve >= 0 && curve < d.curves.length)) return badCurve(d, curve);
+  if (!isIndex(curve, d.curves.length)) return badCurve(d, curve);
   const gone = d.curves[curve];
   const curves = d.curves.filter((_, i) => i !== curve).map((c) => ({
     ...c, index: c.family === gone.family && c.index > gone.index ? c.index - 1 : c.index,
@@ -25,7 +25,7 @@ export function deleteCurve(d: HeegaardDiagram, curve: number): Result<HeegaardD
 
 /** Gives curve number `curve` a new family and index; refuses a name already in use. */
 export function renameCurve(d: HeegaardDiagram, curve: number, family: CurveFamily, index: number): Result<HeegaardDiagram> {
-  if (!(curve >= 0 && curve < d.curves.length)) return badCurve(d, curve);
+  if (!isIndex(curve, d.curves.length)) return badCurve(d, curve);
   if ((family !== 'alpha' && family !== 'beta') || !Number.isInteger(index) || index < 0) {
     return fail({ code: 'bad-name', message: 'a curve name is alpha or beta with a number from 1' });
   }
@@ -47,13 +47,13 @@ export function addBasepoint(d: HeegaardDiagram, kind: BasepointKind, place: Bas
 
 /** Moves basepoint number `which` (position in d.basepoints) to a vertex or surface point off the curves. */
 export function moveBasepoint(d: HeegaardDiagram, which: number, place: BasepointPlace): Result<HeegaardDiagram> {
-  if (!(which >= 0 && which < d.basepoints.length)) return fail({ code: 'unknown-basepoint', message: `there is no basepoint at position ${which}` });
+  if (!isIndex(which, d.basepoints.length)) return fail({ code: 'unknown-basepoint', message: `there is no basepoint at position ${which}` });
   return placeBasepoint(d, which, d.basepoints[which].kind, d.basepoints[which].index, place);
 }
 
 /** Removes basepoint number `which`; later basepoints of its kind move down one index. */
 export function removeBasepoint(d: HeegaardDiagram, which: number): Result<HeegaardDiagram> {
-  if (!(which >= 0 && which < d.basepoints.length)) return fail({ code: 'unknown-basepoint', message: `there is no basepoint at position ${which}` });
+  if (!isIndex(which, d.basepoints.length)) return fail({ code: 'unknown-basepoint', message: `there is no basepoint at position ${which}` });
   const gone = d.basepoints[which];
   const basepoints = d.basepoints.filter((_, i) => i !== which).map((b) => ({ ...b, index: b.kind === gone.kind && b.index > gone.index ? b.index - 1 : b.index }));
   const ws = openDiagram({ ...d, basepoints });

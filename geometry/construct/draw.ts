@@ -9,7 +9,7 @@ import { fail, type Problem, type Result } from '../base/result.js';
 import { findHalfEdge, setEdgeLabel, splitEdge, splitFace, type EditMesh } from '../mesh/edit.js';
 import { next, type TriMesh } from '../mesh/tri-mesh.js';
 import type { CurveFamily, HeegaardDiagram } from '../diagram/types.js';
-import { closeDiagram, fan, openDiagram, wsLabel, type Workspace } from './labels.js';
+import { closeDiagram, fan, isIndex, openDiagram, wsLabel, type Workspace } from './labels.js';
 import { onCurve } from './paths.js';
 import { MinHeap } from './heap.js';
 
@@ -72,6 +72,7 @@ const nextIndex = (ws: Workspace, family: CurveFamily) => ws.curves.filter((c) =
 function addCycle(ws: Workspace, family: CurveFamily, vs: number[]): Problem | null {
   const em = ws.em, id = ws.curves.length + 1;
   const at = (v: number) => wsLabel(ws, v);
+  if (!Array.isArray(vs) || vs.some((v) => !isIndex(v, em.nV))) return { code: 'bad-vertex', message: 'the curve must be a list of vertex indices of the surface' };
   if (vs.length < 3) return { code: 'curve-too-short', message: 'a curve needs at least three vertices' };
   const seen = new Set<number>();
   for (const v of vs) {

@@ -8,7 +8,7 @@ import { fail, type Problem, type Result } from '../base/result.js';
 import { findHalfEdge, setEdgeLabel, type EditMesh } from '../mesh/edit.js';
 import { next } from '../mesh/tri-mesh.js';
 import { curveName, type HeegaardDiagram } from '../diagram/types.js';
-import { closeDiagram, fan, openDiagram, wsLabel, type Workspace } from './labels.js';
+import { closeDiagram, fan, isIndex, openDiagram, wsLabel, type Workspace } from './labels.js';
 import { splitPairs } from './parallel.js';
 import { growMark, traceMarked } from './paths.js';
 
@@ -24,9 +24,9 @@ function checkPath(ws: Workspace, B: number, path: number[]): Problem | null {
   const em = ws.em, fam = ws.curves[B - 1].family;
   const at = (v: number) => wsLabel(ws, v);
   const bad = (code: string, message: string, v: number): Problem => ({ code, message, vertices: [at(v)] });
-  if (path.length < 2) return { code: 'finger-too-short', message: 'a finger path needs at least two vertices' };
+  if (!Array.isArray(path) || path.length < 2) return { code: 'finger-too-short', message: 'a finger path needs at least two vertices' };
+  for (const v of path) if (!isIndex(v, em.nV)) return { code: 'finger-bad-vertex', message: `${String(v)} is not a vertex index of the surface` };
   if (new Set(path).size !== path.length) return bad('finger-not-simple', `the finger path visits vertex ${at(path[0])} or another vertex twice`, path[0]);
-  for (const v of path) if (!(v >= 0 && v < em.nV)) return { code: 'finger-bad-vertex', message: `vertex ${v + 1} is not on the surface` };
   if (!raysAt(em, path[0]).some((r) => r.id === B)) return bad('finger-start', `the finger path must start on ${curveName(ws.curves[B - 1])}`, path[0]);
   for (let i = 0; i + 1 < path.length; i++) {
     const h = findHalfEdge(em, path[i], path[i + 1]);
@@ -113,7 +113,7 @@ export function fingerMoveInPlace(ws: Workspace, B: number, path: number[]): Pro
  * Each crossed curve gains two intersection points and a bigon. Returns a new validated diagram.
  */
 export function fingerMove(d: HeegaardDiagram, curve: number, path: number[]): Result<HeegaardDiagram> {
-  if (!(curve >= 0 && curve < d.curves.length)) return fail({ code: 'unknown-curve', message: `curve positions must be 0 to ${d.curves.length - 1}` });
+  if (!isIndex(curve, d.curves.length)) return fail({ code: 'unknown-curve', message: `curve positions must be 0 to ${d.curves.length - 1}` });
   const ws = openDiagram(d);
   if (!ws.ok) return ws;
   const why = fingerMoveInPlace(ws.value, curve + 1, path);

@@ -170,3 +170,6 @@ export function checkDiagram(d: HeegaardDiagram, options: CloseOptions = {}): Re
   const ws = openDiagram(d);
   return ws.ok ? closeDiagram(ws.value, options) : ws;
 }
+
+/** True when x is a whole number from 0 to n - 1 (guards indices coming from users and servers). */
+export const isIndex = (x: unknown, n: number): x is number => Number.isInteger(x) && (x as number) >= 0 && (x as number) < n;

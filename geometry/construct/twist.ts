@@ -9,7 +9,7 @@ import { fail, type Result } from '../base/result.js';
 import { setEdgeLabel, findHalfEdge, type EditMesh } from '../mesh/edit.js';
 import { next } from '../mesh/tri-mesh.js';
 import { curveName, type HeegaardDiagram } from '../diagram/types.js';
-import { closeDiagram, fan, openDiagram, wsLabel } from './labels.js';
+import { closeDiagram, fan, isIndex, openDiagram, wsLabel } from './labels.js';
 import { cutCorner, parallelCopyLeft } from './parallel.js';
 
 /** Position in d.curves of the curve named alpha_<i> / beta_<i> (1-based as users see it), or -1. */
@@ -79,7 +79,7 @@ export interface TwistOptions {
  */
 export function dehnTwist(d: HeegaardDiagram, curve: number, along: number, options: TwistOptions = {}): Result<HeegaardDiagram> {
   const n = d.curves.length;
-  if (!(curve >= 0 && curve < n) || !(along >= 0 && along < n)) return fail({ code: 'unknown-curve', message: `curve positions must be 0 to ${n - 1}` });
+  if (!isIndex(curve, n) || !isIndex(along, n)) return fail({ code: 'unknown-curve', message: `curve positions must be 0 to ${n - 1}` });
   const ws0 = openDiagram(d);
   if (!ws0.ok) return ws0;
   const ws = ws0.value, em = ws.em;
