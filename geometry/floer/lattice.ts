@@ -168,22 +168,42 @@ export function classInvariant(L: DomainLattice, x: ArrayLike<number>, out: Floa
 export function zeroOneDomains(L: DomainLattice, d0: Int32Array, visit: (d: Int32Array) => void): void {
   const b = L.periodic.length;
   const cur = Int32Array.from(d0);
-  const R = cur.length;
+  const { finalStart, finalCols } = finalColumns(L);
+  // Column r is final once c_0..c_{lastRow(r)} are chosen: prune as soon as a final column leaves {0, 1}.
+  const ok = (level: number): boolean => {
+    for (let i = finalStart[level], e = finalStart[level + 1]; i < e; i++) { const v = cur[finalCols[i]]; if (v !== 0 && v !== 1) return false; }
+    return true;
+  };
   const dfs = (k: number): void => {
-    if (k === b) {
-      for (let r = 0; r < R; r++) if (cur[r] !== 0 && cur[r] !== 1) return;
-      visit(cur);
-      return;
-    }
-    const Pk = L.periodic[k], piv = L.periodicPivots[k], h = Pk[piv];
+    if (k === b) { visit(cur); return; }
+    const Pk = L.periodic[k], piv = L.periodicPivots[k], h = Pk[piv], R = Pk.length;
     for (let t = 0; t <= 1; t++) {
       const num = t - cur[piv];
       if (num % h !== 0) continue;
       const c = num / h;
-      if (c !== 0) for (let r = 0; r < R; r++) cur[r] += c * Pk[r];
-      dfs(k + 1);
-      if (c !== 0) for (let r = 0; r < R; r++) cur[r] -= c * Pk[r];
+      if (c !== 0) for (let r = piv; r < R; r++) cur[r] += c * Pk[r];
+      if (ok(k + 1)) dfs(k + 1);
+      if (c !== 0) for (let r = piv; r < R; r++) cur[r] -= c * Pk[r];
     }
   };
-  dfs(0);
+  if (ok(0)) dfs(0);
+}
+
+const finalCache = new WeakMap<DomainLattice, { finalStart: Int32Array; finalCols: Int32Array }>();
+
+/** Columns grouped by 1 + the last periodic row touching them (group 0: touched by none). O(b R), cached. */
+function finalColumns(L: DomainLattice): { finalStart: Int32Array; finalCols: Int32Array } {
+  const hit = finalCache.get(L);
+  if (hit) return hit;
+  const R = L.comb.regions.length, b = L.periodic.length;
+  const level = new Int32Array(R);
+  L.periodic.forEach((P, k) => { for (let r = 0; r < R; r++) if (P[r] !== 0) level[r] = k + 1; });
+  const finalStart = new Int32Array(b + 2);
+  for (let r = 0; r < R; r++) finalStart[level[r] + 1]++;
+  for (let i = 0; i <= b; i++) finalStart[i + 1] += finalStart[i];
+  const fill = finalStart.slice(), finalCols = new Int32Array(R);
+  for (let r = 0; r < R; r++) finalCols[fill[level[r]]++] = r;
+  const out = { finalStart, finalCols };
+  finalCache.set(L, out);
+  return out;
 }
