@@ -15,9 +15,9 @@ function TorusSketch() {
       <path d="M250 64c-16 6-20 34-8 46" fill="none" stroke="var(--color-curve-alpha)" strokeWidth="3.5" strokeLinecap="round" />
       <path d="M250 64c10 8 10 36-8 46" fill="none" stroke="var(--color-curve-alpha)" strokeWidth="2.5" strokeDasharray="4 5" />
       <circle cx="214" cy="150" r="5" fill="var(--color-point-z)" />
-      <text x="262" y="58" fontSize="15" fill="var(--color-curve-alpha)" fontStyle="italic">α</text>
+      <text x="258" y="94" fontSize="15" fill="var(--color-curve-alpha)" fontStyle="italic">α</text>
       <text x="40" y="86" fontSize="15" fill="var(--color-curve-beta)" fontStyle="italic">β</text>
-      <text x="222" y="166" fontSize="13" fill="var(--color-ink-muted)" fontStyle="italic">z</text>
+      <text x="223" y="155" fontSize="13" fill="var(--color-ink-muted)" fontStyle="italic">z</text>
     </svg>
   );
 }
