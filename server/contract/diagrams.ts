@@ -133,18 +133,20 @@ export const editOperationSchema = z.discriminatedUnion('type', [
   /** Dehn twist of `curve` along `along` (right-handed unless negative; Farb–Margalit 2012, ch. 3). */
   z.object({ type: z.literal('twist'), curve: curveRefSchema, along: curveRefSchema, negative: z.boolean().default(false) }),
   z.object({ type: z.literal('subdivide'), method: z.enum(['midpoint', 'loop']) }),
-  /** Draw a new curve through picked points, joined by shortest paths on the mesh. */
+  /** Draw a new closed curve through at least 3 picked points (straight walks across faces, else shortest
+   *  edge paths). `closed: false` is refused: attaching curves are closed. */
   z.object({
     type: z.literal('draw-curve'),
     family: curveFamilySchema,
-    points: z.array(surfacePointSchema).min(2).max(2000),
+    points: z.array(surfacePointSchema).min(3).max(2000),
     closed: z.boolean().default(true),
   }),
-  /** Push a finger of `curve` along the picked path (which starts next to `curve`) across other curves. */
+  /** Push a finger of `curve` along the picked path: it starts on `curve` (points snap to their nearest
+   *  vertex, consecutive ones are joined by shortest edge paths), crosses curves of the other family, ends off all curves. */
   z.object({ type: z.literal('finger-move'), curve: curveRefSchema, path: z.array(surfacePointSchema).min(2).max(2000) }),
   z.object({ type: z.literal('delete-curve'), curve: curveRefSchema }),
-  /** Give a curve another index in its family (the curve holding that index swaps with it). */
-  z.object({ type: z.literal('rename-curve'), curve: curveRefSchema, index: index0 }),
+  /** Give a curve another name: a new index, and optionally the other family; refused if the name is taken. */
+  z.object({ type: z.literal('rename-curve'), curve: curveRefSchema, index: index0, family: curveFamilySchema.optional() }),
   z.object({ type: z.literal('add-basepoint'), kind: basepointKindSchema, at: surfacePointSchema }),
   z.object({ type: z.literal('move-basepoint'), basepoint: basepointRefSchema, at: surfacePointSchema }),
   z.object({ type: z.literal('remove-basepoint'), basepoint: basepointRefSchema }),

@@ -10,6 +10,9 @@ import { devRouter } from './dev/dev.routes.js';
 import { healthRouter } from './health/health.routes.js';
 import { invitationsRouter } from './invitations/invitations.routes.js';
 import { workspacesRouter } from './workspaces/workspaces.routes.js';
+import { diagramsRouter } from './diagrams/diagrams.routes.js';
+import { domainsRouter } from './domains/domains.routes.js';
+import { sharesRouter } from './shares/shares.routes.js';
 
 export function registerRoutes(api: Router, deps: AppDeps, auth: passport.Authenticator): void {
   api.use(healthRouter(deps));
@@ -18,4 +21,7 @@ export function registerRoutes(api: Router, deps: AppDeps, auth: passport.Authen
   api.use(invitationsRouter(deps));
   if (deps.env.NODE_ENV !== 'production') api.use(devRouter(deps));
   // --- lab routers (diagrams, domains, shares): one line each below ---
+  api.use(diagramsRouter(deps));
+  api.use(domainsRouter(deps));
+  api.use(sharesRouter(deps));
 }
