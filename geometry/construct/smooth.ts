@@ -15,6 +15,10 @@ export interface SmoothOptions {
   iterations?: number;
   /** Fraction of the way to the neighbours' midpoint per pass, 0 < strength <= 1 (default 0.5). */
   strength?: number;
+  /** Positions in d.curves of the curves to smooth (default: all). */
+  curves?: number[];
+  /** Move only vertices numbered from this one on (0-based; default 0), e.g. those an operation created. */
+  fromVertex?: number;
 }
 
 /** Normal of face f (unnormalised, length = twice the area). */
@@ -49,14 +53,17 @@ export function smoothCurves(d: HeegaardDiagram, options: SmoothOptions = {}): R
   const ws = openDiagram(d);
   if (!ws.ok) return ws;
   const em = ws.value.em, p = em.pos;
+  const only = options.curves;
+  if (only && !only.every((c) => Number.isInteger(c) && c >= 0 && c < d.curves.length)) return fail({ code: 'unknown-curve', message: `curve positions must be 0 to ${d.curves.length - 1}` });
   const crossing = new Uint8Array(em.nV);
   for (const c of d.curves) for (const v of c.vertices) crossing[v]++;
   for (let it = 0; it < iterations; it++) {
-    for (const c of d.curves) {
+    for (const [ci, c] of d.curves.entries()) {
+      if (only && !only.includes(ci)) continue;
       const vs = c.vertices, n = vs.length;
       for (let i = 0; i < n; i++) {
         const v = vs[i];
-        if (crossing[v] > 1) continue;
+        if (crossing[v] > 1 || v < (options.fromVertex ?? 0)) continue;
         const a = vs[(i + n - 1) % n], b = vs[(i + 1) % n];
         const delta = [0, 1, 2].map((k) => strength * (0.5 * (p[3 * a + k] + p[3 * b + k]) - p[3 * v + k]));
         // Remove the normal component (vertex normal = sum of face normals around v).

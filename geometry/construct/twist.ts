@@ -11,6 +11,7 @@ import { next } from '../mesh/tri-mesh.js';
 import { curveName, type HeegaardDiagram } from '../diagram/types.js';
 import { closeDiagram, fan, isIndex, openDiagram, wsLabel } from './labels.js';
 import { cutCorner, parallelCopyLeft } from './parallel.js';
+import { smoothCurves } from './smooth.js';
 
 /** Position in d.curves of the curve named alpha_<i> / beta_<i> (1-based as users see it), or -1. */
 export function curveIndexByName(d: HeegaardDiagram, name: string): number {
@@ -70,6 +71,8 @@ function mergeInto(em: EditMesh, ids: Set<number>, target: number, h0: number): 
 export interface TwistOptions {
   /** Twist the other way, T_a^{-1}. */
   negative?: boolean;
+  /** Smoothing passes over the new vertices of the twisted curve afterwards (default 3; 0 keeps the raw staircase). */
+  smooth?: number;
 }
 
 /**
@@ -126,5 +129,10 @@ export function dehnTwist(d: HeegaardDiagram, curve: number, along: number, opti
     if (Math.abs(em.heCurve[h]) > n) return fail({ code: 'internal-twist', message: `the twisted ${curveName(bc)} fell into several pieces; this is a bug in Quadrant` });
   }
   ws.curves[curve].start = em.heVert[h0];
-  return closeDiagram(ws);
+  const out = closeDiagram(ws);
+  const passes = options.smooth ?? 3;
+  if (!out.ok || !(Number.isInteger(passes) && passes > 0)) return out;
+  // Same connectivity as the validated `out`; only positions of the twisted curve move.
+  const smoothed = smoothCurves(out.value, { iterations: Math.min(passes, 100), curves: [curve], fromVertex: d.mesh.nV });
+  return smoothed.ok ? smoothed : out;
 }
