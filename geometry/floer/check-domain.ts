@@ -22,6 +22,14 @@ export interface DomainCheck {
   undetermined?: { alphas: number[]; betas: number[] };
   /** Corner map J(D) per point. */
   corners: number[];
+  /**
+   * ∂D split along the curves: multiplicity of ∂D on the alpha arc leaving each point in alpha's direction
+   * (a_NE - a_SE: the region on the left minus the one on the right), and likewise on the beta arc leaving it
+   * (a_NW - a_NE when beta runs north, a_SE - a_SW when it runs south). The arc entering p carries the
+   * previous point's value, so ∂(∂D ∩ α) at p = in - out = -J(p).
+   */
+  alphaArcs: number[];
+  betaArcs: number[];
   eulerMeasure: string;
   eulerQuarters: number;
   /** Σ a_R · (measured Euler measure of R) when the regions carry one, else null. */
@@ -37,6 +45,13 @@ export interface DomainCheck {
 export interface DomainEnds {
   from?: number[];
   to?: number[];
+}
+
+/** Multiplicities of ∂D on the arcs leaving each point along alpha and along beta. O(points) */
+function arcMultiplicities(comb: CombinatorialDiagram, a: ArrayLike<number>): { alphaArcs: number[]; betaArcs: number[] } {
+  const alphaArcs = comb.points.map((p) => a[p.quadrants[0]] - a[p.quadrants[3]]);
+  const betaArcs = comb.points.map((p) => (p.sign > 0 ? a[p.quadrants[1]] - a[p.quadrants[0]] : a[p.quadrants[3]] - a[p.quadrants[2]]));
+  return { alphaArcs, betaArcs };
 }
 
 /** Completions of the free curves by points with J = 0, stopping after two. O(matchings visited) */
@@ -123,7 +138,7 @@ function resolveEnds(comb: CombinatorialDiagram, J: Int32Array, plus: number[], 
 export function checkDomain(comb: CombinatorialDiagram, coeffs: ArrayLike<number>, ends: DomainEnds = {}): DomainCheck {
   const R = comb.regions.length;
   const base = {
-    from: null, to: null, corners: [] as number[], eulerMeasure: '0', eulerQuarters: 0, geometricEulerMeasure: null,
+    from: null, to: null, corners: [] as number[], alphaArcs: [] as number[], betaArcs: [] as number[], eulerMeasure: '0', eulerQuarters: 0, geometricEulerMeasure: null,
     nx: null, ny: null, nz: [] as number[], maslovIndex: null, positive: false,
   };
   if (coeffs.length !== R) return { ...base, isDomain: false, reason: `expected ${R} region coefficients, got ${coeffs.length}` };
@@ -135,7 +150,7 @@ export function checkDomain(comb: CombinatorialDiagram, coeffs: ArrayLike<number
   let positive = true;
   for (let i = 0; i < R; i++) if (coeffs[i] < 0) positive = false;
   const common = {
-    corners: Array.from(J), eulerMeasure: quartersText(eq), eulerQuarters: eq, geometricEulerMeasure: geo,
+    corners: Array.from(J), ...arcMultiplicities(comb, coeffs), eulerMeasure: quartersText(eq), eulerQuarters: eq, geometricEulerMeasure: geo,
     nz: basepointMultiplicities(comb, coeffs), positive,
   };
   const plus: number[] = [], minus: number[] = [];

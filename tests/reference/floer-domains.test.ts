@@ -109,3 +109,16 @@ describe('domains between generators with n_z = 0 (Ozsváth–Szabó 2004, §2.4
     }
   });
 });
+
+describe('the boundary split along alpha and beta (Ozsváth–Szabó 2004, §2.4)', () => {
+  it('gives a bigon boundary one alpha arc and one beta arc of multiplicity 1, with ∂(∂D ∩ α) = y - x', () => {
+    const c = combinatorialS1xS2();
+    const r = checkDomain(c, [1, 0, 0]); // B1 from a (point 0) to b (point 1)
+    // leaving a along alpha (east) runs the bottom of B1: +1; leaving b along alpha runs below A/B2: 0
+    expect(r.alphaArcs).toEqual([1, 0]);
+    // in-flow minus out-flow along alpha at each point: the arc into a is the arc out of b (one alpha, two arcs)
+    const inA = r.alphaArcs[1], inB = r.alphaArcs[0];
+    expect([inA - r.alphaArcs[0], inB - r.alphaArcs[1]]).toEqual([-1, 1]); // = -J: -1 at x = a, +1 at y = b
+    expect(r.betaArcs.map(Math.abs).sort()).toEqual([0, 1]);
+  });
+});
