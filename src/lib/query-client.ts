@@ -1,12 +1,24 @@
-import { QueryClient } from '@tanstack/react-query';
+import { MutationCache, QueryCache, QueryClient } from '@tanstack/react-query';
 import { ApiError, isApiUnreachable } from './api';
+
+/** True for "your session is gone" (not for a wrong password, which is `invalid_credentials`). */
+function isSessionLost(error: unknown): boolean {
+  return error instanceof ApiError && error.code === 'unauthenticated';
+}
 
 /**
  * Builds the app's QueryClient. Client errors (4xx) are never retried; an unreachable API is retried twice
- * with a short back-off before screens show the "server is not answering" state.
+ * with a short back-off before screens show the "server is not answering" state. When any request answers
+ * `unauthenticated` (session expired or signed out elsewhere), the `me` query becomes null, so protected
+ * routes send the user to sign-in and back.
  */
 export function createQueryClient(): QueryClient {
-  return new QueryClient({
+  const onError = (error: unknown) => {
+    if (isSessionLost(error) && client.getQueryData(queryKeys.me)) client.setQueryData(queryKeys.me, null);
+  };
+  const client: QueryClient = new QueryClient({
+    queryCache: new QueryCache({ onError }),
+    mutationCache: new MutationCache({ onError }),
     defaultOptions: {
       queries: {
         staleTime: 30_000,
@@ -21,6 +33,7 @@ export function createQueryClient(): QueryClient {
       mutations: { retry: false },
     },
   });
+  return client;
 }
 
 /** Query keys shared across features, so invalidation stays consistent. */

@@ -70,6 +70,13 @@ describe('accounts and workspaces in a browser', () => {
     await s.page.getByRole('button', { name: `Account: ${DEMO_USERS.owner.name}` }).waitFor();
   });
 
+  it('sends the user to sign-in when the session ends while the app is open', async () => {
+    await s.context.clearCookies();
+    await s.page.getByRole('link', { name: new RegExp(DEMO_WORKSPACE_NAME) }).click();
+    await s.page.waitForURL((u) => u.pathname === '/sign-in' && (u.searchParams.get('next') ?? '').startsWith('/w/'));
+    await signIn(s.page, s.baseUrl, 'owner', '/workspaces');
+  });
+
   it('shows a full-page retry state while the API is unreachable, and recovers', async () => {
     await s.context.route('**/api/**', (route) => route.abort('connectionrefused'));
     await s.page.goto(s.url('/workspaces'));
