@@ -3,6 +3,7 @@
  */
 import type { Db } from '../db/client.js';
 import { seedDemo, type DemoSeed } from './demo.js';
+import { seedDemoDiagrams } from './diagrams.js';
 
 export interface SeedOptions {
   /** scrypt cost exponent for demo passwords (tests lower it). */
@@ -12,5 +13,6 @@ export interface SeedOptions {
 export async function seedAll(db: Db, options: SeedOptions = {}): Promise<DemoSeed> {
   const demo = await seedDemo(db, options);
   // --- lab seeds: diagrams of the demo workspace (lab-server helper adds one line below) ---
+  await seedDemoDiagrams(db, demo);
   return demo;
 }
