@@ -11,7 +11,7 @@ import * as THREE from 'three';
 import { palette } from '../lib/palette';
 import { boundingSphere, faceCentroid, faceNormal, meanEdgeLength, vertexNormals } from './mesh-buffers';
 import {
-  CurveTube, DrawPath, FaceOverlay, LabelProjector, PointMarkers, SurfaceMesh, facePick,
+  CurveTube, DrawPath, FaceOverlay, LabelProjector, PointMarkers, SurfaceMesh, TAP_SLOP, facePick,
   type LabelAnchor, type SceneScale,
 } from './scene-parts';
 import type { SurfaceViewHandle, SurfaceViewProps, ViewerPick, Vec3 } from './types';
@@ -33,7 +33,7 @@ interface RigProps {
 
 /** Camera placement, fit/reset/orbit/zoom and face projection; fills `handle`. */
 function CameraRig({ sphere, surfaceRef, positions, triangles, handle }: RigProps) {
-  const { camera, gl, invalidate, size } = useThree();
+  const { camera, gl, invalidate, size, scene } = useThree();
   const controls = useThree((s) => s.controls) as unknown as ControlsLike | null;
   const raycaster = useMemo(() => new THREE.Raycaster(), []);
   const placed = useRef<string>('');
@@ -101,12 +101,13 @@ function CameraRig({ sphere, surfaceRef, positions, triangles, handle }: RigProp
       const ndc = new THREE.Vector3(...c).project(camera);
       if (Math.abs(ndc.x) > 0.98 || Math.abs(ndc.y) > 0.98 || ndc.z >= 1) return null;
       raycaster.setFromCamera(new THREE.Vector2(ndc.x, ndc.y), camera);
-      const hit = raycaster.intersectObject(mesh, false)[0];
-      if (!hit || hit.faceIndex !== face) return null;
+      // The first thing the pointer would hit there must be this face (not a marker, not another fold).
+      const hit = raycaster.intersectObjects(scene.children, true)[0];
+      if (!hit || hit.object !== mesh || hit.faceIndex !== face) return null;
       const rect = gl.domElement.getBoundingClientRect();
       return { x: rect.left + ((ndc.x + 1) / 2) * rect.width, y: rect.top + ((1 - ndc.y) / 2) * rect.height };
     },
-  }), [camera, controls, gl, invalidate, place, positions, raycaster, sphere.center, surfaceRef, triangles]);
+  }), [camera, controls, gl, invalidate, place, positions, raycaster, scene, sphere.center, surfaceRef, triangles]);
   return null;
 }
 
@@ -163,15 +164,19 @@ export default function SurfaceView(props: SurfaceViewProps) {
   const onMove = useCallback((e: ThreeEvent<PointerEvent>) => {
     report(facePick(e, positions, triangles, 0));
   }, [report, positions, triangles]);
-  const onClick = useCallback((e: ThreeEvent<MouseEvent>) => {
-    const pick = facePick(e, positions, triangles, 0);
+  // Clicks: a press and release close together on the surface (see TAP_SLOP); button 2 is the secondary click.
+  const press = useRef<{ x: number; y: number; button: number } | null>(null);
+  const onDown = useCallback((e: ThreeEvent<PointerEvent>) => {
+    press.current = { x: e.clientX, y: e.clientY, button: e.button };
+  }, []);
+  const onUp = useCallback((e: ThreeEvent<PointerEvent>) => {
+    const d = press.current;
+    press.current = null;
+    if (!d || d.button !== e.button || Math.hypot(e.clientX - d.x, e.clientY - d.y) > TAP_SLOP) return;
+    const pick = facePick(e, positions, triangles, e.button === 2 ? 2 : 0);
     if (pick) onPick?.(pick);
   }, [onPick, positions, triangles]);
-  const onContext = useCallback((e: ThreeEvent<MouseEvent>) => {
-    e.nativeEvent.preventDefault();
-    const pick = facePick(e, positions, triangles, 2);
-    if (pick) onPick?.(pick);
-  }, [onPick, positions, triangles]);
+  const onContext = useCallback((e: ThreeEvent<MouseEvent>) => { e.nativeEvent.preventDefault(); }, []);
 
   const anchors: LabelAnchor[] = useMemo(() => {
     const at = (v: number, lift: number): { position: Vec3; normal: Vec3 } => {
@@ -181,9 +186,24 @@ export default function SurfaceView(props: SurfaceViewProps) {
     };
     const out: LabelAnchor[] = [];
     for (const p of points) out.push({ id: `p:${p.id}`, ...at(p.vertex, scale.lift * 3) });
+    // Curve labels sit at the curve vertex farthest (along the cycle) from any marked point, so they do not
+    // cover point labels. O(total curve length).
+    const marked = new Set(points.map((p) => p.vertex));
     for (const c of curves) {
-      if (c.vertices.length === 0) continue;
-      out.push({ id: `c:${c.id}`, ...at(c.vertices[Math.floor(c.vertices.length / 3)], scale.lift * 3) });
+      const n = c.vertices.length;
+      if (n === 0) continue;
+      const dist = new Array<number>(n).fill(Infinity);
+      for (let pass = 0; pass < 2; pass++) {
+        let last = -Infinity;
+        for (let k = 0; k < 2 * n; k++) {
+          const i = pass === 0 ? k % n : (2 * n - 1 - k) % n;
+          if (marked.has(c.vertices[i])) last = k;
+          dist[i] = Math.min(dist[i], k - last);
+        }
+      }
+      let best = Math.floor(n / 3);
+      for (let i = 0; i < n; i++) if (dist[i] > dist[best]) best = i;
+      out.push({ id: `c:${c.id}`, ...at(c.vertices[best], scale.lift * 3) });
     }
     return out;
   }, [points, curves, normals, positions, scale.lift]);
@@ -212,6 +232,7 @@ export default function SurfaceView(props: SurfaceViewProps) {
       aria-describedby={instructionsId}
       tabIndex={0}
       onKeyDown={onKeyDown}
+      onContextMenu={(e) => e.preventDefault()}
       data-testid="surface-view"
     >
       <p id={instructionsId} className="sr-only">
@@ -239,7 +260,8 @@ export default function SurfaceView(props: SurfaceViewProps) {
           surfaceRef={surfaceRef}
           onMove={onMove}
           onOut={() => report(null)}
-          onClick={onClick}
+          onDown={onDown}
+          onUp={onUp}
           onContext={onContext}
         />
         <FaceOverlay positions={positions} triangles={triangles} normals={normals} mask={props.warnFaces} lift={scale.lift * 0.3} color={palette.danger} opacity={0.35} />

@@ -18,6 +18,12 @@ export interface SceneScale {
 
 const NO_RAYCAST = () => null;
 
+/**
+ * A press and release within this many pixels is a click. Clicks are detected from pointerdown/up on the
+ * object itself rather than the DOM click event, which the orbit controls' pointer capture can redirect.
+ */
+export const TAP_SLOP = 4;
+
 interface SurfaceProps {
   positions: Float32Array;
   triangles: Uint32Array;
@@ -28,7 +34,8 @@ interface SurfaceProps {
   surfaceRef: React.RefObject<THREE.Mesh | null>;
   onMove: (e: ThreeEvent<PointerEvent>) => void;
   onOut: () => void;
-  onClick: (e: ThreeEvent<MouseEvent>) => void;
+  onDown: (e: ThreeEvent<PointerEvent>) => void;
+  onUp: (e: ThreeEvent<PointerEvent>) => void;
   onContext: (e: ThreeEvent<MouseEvent>) => void;
 }
 
@@ -56,7 +63,8 @@ export function SurfaceMesh(p: SurfaceProps) {
         geometry={geometry}
         onPointerMove={p.onMove}
         onPointerOut={p.onOut}
-        onClick={p.onClick}
+        onPointerDown={p.onDown}
+        onPointerUp={p.onUp}
         onContextMenu={p.onContext}
       >
         <meshLambertMaterial vertexColors side={THREE.DoubleSide} polygonOffset polygonOffsetFactor={1} polygonOffsetUnits={1} />
@@ -125,6 +133,7 @@ export function PointMarkers(p: {
   onPick: (pick: ViewerPick) => void;
 }) {
   const sphere = useMemo(() => new THREE.SphereGeometry(1, 16, 12), []);
+  const taps = useMemo(() => new Map<string, [number, number]>(), []);
   useEffect(() => () => sphere.dispose(), [sphere]);
   return (
     <group>
@@ -151,7 +160,13 @@ export function PointMarkers(p: {
             scale={r}
             onPointerMove={(e) => { e.stopPropagation(); p.onHover(pick(e, 0)); }}
             onPointerOut={() => p.onHover(null)}
-            onClick={(e) => { e.stopPropagation(); p.onPick(pick(e, 0)); }}
+            onPointerDown={(e) => { e.stopPropagation(); taps.set(pt.id, [e.clientX, e.clientY]); }}
+            onPointerUp={(e) => {
+              e.stopPropagation();
+              const d = taps.get(pt.id);
+              taps.delete(pt.id);
+              if (d && Math.hypot(e.clientX - d[0], e.clientY - d[1]) <= TAP_SLOP) p.onPick(pick(e, e.button));
+            }}
           >
             <meshLambertMaterial color={color} emissive={color} emissiveIntensity={lit ? 0.6 : 0.2} />
           </mesh>

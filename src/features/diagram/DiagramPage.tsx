@@ -11,7 +11,7 @@ import { ApiError, errorMessage } from '../../lib/api';
 import { Alert, Button, LoadingState, QueryError } from '../../lib/ui';
 import type { SurfaceViewHandle, ViewerPick } from '../../viewer/types';
 import { useAnalysis, useDiagram, useEdit, useMesh, useReloadDiagram, useRestore, useRevisions } from './api';
-import { curveLabel, decimalText, fractionText, regionLabel } from './format';
+import { basepointLabel, basepointNames, curveLabel, decimalText, fractionText, pointLabel, regionLabel } from './format';
 import { coloring, regionIndex, regionMask, viewerCurves, viewerPoints, type ColorMode, type PointNaming } from './model';
 import { DomainsPanel } from './panels/DomainsPanel';
 import { EditPanel, type DrawState } from './panels/EditPanel';
@@ -190,9 +190,9 @@ export default function DiagramPage() {
     if (!result) return null;
     if (pick.kind === 'point') {
       const x = result.intersections.find((i) => `x${i.id}` === pick.id);
-      if (x) return <span><strong>x{x.id + 1}</strong> = {curveLabel('alpha', x.alpha)} ∩ {curveLabel('beta', x.beta)}, sign {x.sign > 0 ? '+1' : '−1'}, file vertex {x.label}</span>;
+      if (x) return <span><strong>{pointLabel(x.id)}</strong> = {curveLabel('alpha', x.alpha)} ∩ {curveLabel('beta', x.beta)}, sign {x.sign > 0 ? '+1' : '−1'}, file vertex {x.label}</span>;
       const b = result.basepoints.find((q) => `${q.kind}${q.index}` === pick.id);
-      return b ? <span>Basepoint <strong>{b.name}</strong> in {regionLabel(b.region)}</span> : null;
+      return b ? <span>Basepoint <strong>{basepointLabel(b.kind, b.index)}</strong> in {regionLabel(b.region)}</span> : null;
     }
     const r = result.regions[regionOf(pick.face)];
     if (!r) return null;
@@ -200,7 +200,7 @@ export default function DiagramPage() {
       <span className="block leading-5">
         <strong>{regionLabel(r.id)}</strong> · χ = {r.chi} · {r.corners} corners<br />
         e = {fractionText(r.eulerMeasure)} (corners), {decimalText(r.geometricEulerMeasure)} (Gauss–Bonnet)
-        {r.basepoints.length > 0 && <><br />Basepoints {r.basepoints.join(', ')}</>}
+        {r.basepoints.length > 0 && <><br />Basepoints {basepointNames(r.basepoints)}</>}
         {tab === 'domains' && <><br />Coefficient {domain[r.id] ?? 0}</>}
       </span>
     );
@@ -212,12 +212,18 @@ export default function DiagramPage() {
     w.__quadrantLab = {
       regionScreenPoint(region: number) {
         const faces = index?.facesOf[region] ?? [];
-        for (const f of faces) { const p = handle.current?.projectFace(f); if (p) return p; }
+        const pos = mesh.data?.positions, tri = mesh.data?.triangles;
+        if (!pos || !tri || faces.length === 0) return null;
+        // Try faces from the region's middle outwards, away from curves and markers.
+        const c = (f: number, k: number) => (pos[3 * tri[3 * f] + k] + pos[3 * tri[3 * f + 1] + k] + pos[3 * tri[3 * f + 2] + k]) / 3;
+        const mid = [0, 1, 2].map((k) => faces.reduce((s, f) => s + c(f, k), 0) / faces.length);
+        const order = [...faces].sort((a, b) => [0, 1, 2].reduce((s, k) => s + (c(a, k) - mid[k]) ** 2 - (c(b, k) - mid[k]) ** 2, 0));
+        for (const f of order) { const p = handle.current?.projectFace(f); if (p) return p; }
         return null;
       },
     };
     return () => { delete w.__quadrantLab; };
-  }, [index]);
+  }, [index, mesh.data]);
 
   if (diagram.isPending) return <LoadingState label="Loading the diagram…" />;
   if (diagram.error) return <div className="p-6"><QueryError error={diagram.error} what="this diagram" onRetry={() => diagram.refetch()} /></div>;

@@ -55,13 +55,13 @@ export function ViewPane(p: ViewPaneProps) {
         <Button size="sm" variant="secondary" onClick={() => h.current?.orbit(0.35, 0)} aria-label="Orbit right">⟳</Button>
         <label className="ml-2 flex items-center gap-1.5 text-sm">
           <span className="text-ink-muted">Colour by</span>
-          <select className="h-8 rounded-md border border-line-strong bg-surface px-2 text-sm" value={p.colorMode} onChange={(e) => p.onColorMode(e.target.value as ColorMode)}>
+          <select className="h-8 w-auto rounded-md border border-line-strong bg-surface px-2 text-sm" value={p.colorMode} onChange={(e) => p.onColorMode(e.target.value as ColorMode)}>
             {p.colorModes.map((m) => <option key={m} value={m}>{COLOR_MODE_LABELS[m]}</option>)}
           </select>
         </label>
         <label className="flex items-center gap-1.5 text-sm">
           <span className="text-ink-muted">Points</span>
-          <select className="h-8 rounded-md border border-line-strong bg-surface px-2 text-sm" value={p.naming} onChange={(e) => p.onNaming(e.target.value as PointNaming)}>
+          <select className="h-8 w-auto rounded-md border border-line-strong bg-surface px-2 text-sm" value={p.naming} onChange={(e) => p.onNaming(e.target.value as PointNaming)}>
             <option value="names">x₁, x₂, …</option>
             <option value="vertices">File vertex numbers</option>
           </select>

@@ -14,6 +14,9 @@ export const regionLabel = (id: number) => `R${subscript(id + 1)}`;
 /** Basepoint name z_1 → z₁ (and w). */
 export const basepointLabel = (kind: 'z' | 'w', index: number) => `${kind}${subscript(index + 1)}`;
 
+/** Server basepoint names z_1, w_2 → z₁, w₂, joined with commas. */
+export const basepointNames = (names: readonly string[]) => names.map((n) => n.replace(/_(\d+)$/, (_, d: string) => subscript(Number(d)))).join(', ');
+
 const MINUS = '−';
 
 /**

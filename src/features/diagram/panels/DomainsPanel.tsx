@@ -3,7 +3,7 @@ import type { DomainCheckResponse, Region } from '../../../../server/contract/in
 import { errorMessage } from '../../../lib/api';
 import { Button, Spinner, TextField } from '../../../lib/ui';
 import { normalizeCoefficients, useDeleteDomain, useDomainCheck, useSaveDomain, useSavedDomains } from '../api';
-import { dateText, generatorText, rationalTex, rationalText, regionLabel } from '../format';
+import { basepointNames, dateText, generatorText, rationalTex, rationalText, regionLabel } from '../format';
 import { Tex } from '../Tex';
 import { rowClass, type Focus } from './shared';
 
@@ -96,7 +96,7 @@ export function DomainsPanel(p: DomainsPanelProps) {
                       <button type="button" className="h-6 w-6 rounded border border-line-strong bg-surface" aria-label={`Add 1 to ${regionLabel(r.id)}`} onClick={() => bump(r.id, 1)}>+</button>
                     </div>
                   </td>
-                  <td className="px-2 py-1">{r.basepoints.join(', ')}</td>
+                  <td className="px-2 py-1">{basepointNames(r.basepoints)}</td>
                 </tr>
               );
             })}

@@ -1,6 +1,6 @@
 import { useEffect, useRef } from 'react';
 import type { Region } from '../../../../server/contract/index.js';
-import { decimalText, fractionText, regionLabel } from '../format';
+import { basepointNames, decimalText, fractionText, regionLabel } from '../format';
 import { rowClass, type Focus } from './shared';
 
 export interface RegionsPanelProps {
@@ -74,7 +74,7 @@ export function RegionsPanel({ regions, hover, selected, onHover, onSelect }: Re
                   <td className={`px-2 py-1 text-right tabular-nums ${Math.abs(r.difference) > 1e-6 ? 'font-semibold text-danger' : 'text-ink-muted'}`}>
                     {Math.abs(r.difference) < 1e-9 ? '0' : r.difference.toExponential(1)}
                   </td>
-                  <td className="px-2 py-1">{r.basepoints.join(', ') || <span className="text-ink-faint">—</span>}</td>
+                  <td className="px-2 py-1">{basepointNames(r.basepoints) || <span className="text-ink-faint">—</span>}</td>
                 </tr>
               );
             })}
