@@ -1,3 +1,4 @@
+import { sql } from 'drizzle-orm';
 import { beforeAll, describe, expect, it } from 'vitest';
 import {
   DIAGRAM_PATHS, diagramListResponseSchema, domainCheckResponseSchema, generatorsPageResponseSchema,
@@ -5,7 +6,7 @@ import {
   type AnalysisResult,
 } from '../../server/contract/diagrams.js';
 import { decodeInt32Base64, decodeMeshBinary } from '../../server/contract/mesh-binary.js';
-import { createTestApp, makeTeam } from './helpers.js';
+import { createTestApp, makeTeam, testDb } from './helpers.js';
 import { binaryParser, createFromTemplate, templateObj, waitForAnalysis } from './diagrams-helpers.js';
 
 const app = createTestApp();
@@ -240,5 +241,21 @@ describe('share links', () => {
     expect(JSON.stringify(list.body)).not.toContain(token);
     await team.editor.agent.delete(DIAGRAM_PATHS.share(d.id, share.id)).expect(204);
     expect((await team.anonymous.get(DIAGRAM_PATHS.publicShare(token))).status).toBe(404);
+  });
+});
+
+describe('analysis queue', () => {
+  it('picks up an analysis left running by a stopped server when the next server starts', async () => {
+    const d = await createFromTemplate(team.editor.agent, team.workspace.id, { kind: 'lens', p: 3, q: 1 });
+    await waitForAnalysis(team.editor.agent, d.id, 1);
+    // As if the server stopped in the middle of the job.
+    await testDb().execute(sql`UPDATE analyses SET status = 'running', result = NULL, progress = 0.3, finished_at = NULL
+      WHERE revision_id = (SELECT id FROM diagram_revisions WHERE diagram_id = ${d.id} AND number = 1)`);
+    const running = await team.viewer.agent.get(DIAGRAM_PATHS.analysis(d.id, 1));
+    expect(running.body).toMatchObject({ status: 'running', result: null });
+    createTestApp();
+    const a = await waitForAnalysis(team.viewer.agent, d.id, 1);
+    expect(a.status).toBe('done');
+    expect(a.result?.floer?.h1).toBe('Z/3');
   });
 });
