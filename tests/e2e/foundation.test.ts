@@ -55,6 +55,7 @@ describe('the foundation in a browser', () => {
   it('opens the workspace and shows its three members with their roles', async () => {
     await s.page.getByRole('link', { name: new RegExp(DEMO_WORKSPACE_NAME) }).click();
     await s.page.getByRole('heading', { level: 1, name: DEMO_WORKSPACE_NAME }).waitFor();
+    await expect.poll(() => s.page.title()).toBe(`${DEMO_WORKSPACE_NAME} · Quadrant`);
     await s.screenshot('foundation-workspace-library');
     await s.page.getByRole('navigation', { name: 'Workspace sections' }).getByRole('link', { name: 'Members' }).click();
     await s.page.waitForURL((u) => u.pathname.endsWith('/members'));

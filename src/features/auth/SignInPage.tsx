@@ -7,6 +7,7 @@ import { safeNextPath } from '../../lib/navigation';
 import { useMe, useSignIn } from '../../lib/session';
 import { Alert, Button, TextField } from '../../lib/ui';
 import { AuthLayout } from './AuthLayout';
+import { useDocumentTitle } from '../../lib/document-title';
 
 function signInMessage(error: unknown): string {
   if (isApiUnreachable(error)) return 'Quadrant’s server is not answering. Please try again in a moment.';
@@ -26,6 +27,7 @@ export default function SignInPage() {
   const signIn = useSignIn();
   const navigate = useNavigate();
   const [errors, setErrors] = useState<FieldErrors>({});
+  useDocumentTitle('Sign in');
 
   if (user && !signIn.isSuccess) return <Navigate to={next} replace />;
 

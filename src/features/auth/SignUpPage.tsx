@@ -7,6 +7,7 @@ import { safeNextPath } from '../../lib/navigation';
 import { useMe, useSignUp } from '../../lib/session';
 import { Alert, Button, TextField } from '../../lib/ui';
 import { AuthLayout } from './AuthLayout';
+import { useDocumentTitle } from '../../lib/document-title';
 
 function signUpMessage(error: unknown): string {
   if (isApiUnreachable(error)) return 'Quadrant’s server is not answering. Please try again in a moment.';
@@ -27,6 +28,7 @@ export default function SignUpPage() {
   const signUp = useSignUp();
   const navigate = useNavigate();
   const [errors, setErrors] = useState<FieldErrors>({});
+  useDocumentTitle('Create an account');
 
   if (user && !signUp.isSuccess) return <Navigate to={next} replace />;
   const shown = { ...serverFieldErrors(signUp.error), ...errors };

@@ -3,6 +3,7 @@ import { ApiError, errorMessage } from '../../lib/api';
 import { useMe } from '../../lib/session';
 import { Alert, Button, ButtonLink, Card, LogoMark } from '../../lib/ui';
 import { useAcceptInvitation } from './api';
+import { useDocumentTitle } from '../../lib/document-title';
 
 function acceptMessage(error: unknown): string {
   if (error instanceof ApiError && error.code === 'validation') {
@@ -19,6 +20,7 @@ export default function InviteAcceptPage() {
   const { data: user } = useMe();
   const accept = useAcceptInvitation();
   const navigate = useNavigate();
+  useDocumentTitle('Join a workspace');
 
   return (
     <div className="mx-auto max-w-lg py-10">

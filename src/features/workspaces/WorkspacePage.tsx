@@ -5,6 +5,7 @@ import { errorMessage, hasStatus } from '../../lib/api';
 import { serverFieldErrors, validate, type FieldErrors } from '../../lib/forms';
 import { Alert, Button, Card, LoadingState, NotFoundView, PageHeader, QueryError, RoleBadge, TextAreaField, TextField, cx } from '../../lib/ui';
 import { useUpdateWorkspace, useWorkspace } from './api';
+import { useDocumentTitle } from '../../lib/document-title';
 
 /** What child routes of the workspace page receive through `useOutletContext()`. */
 export interface WorkspaceOutletContext {
@@ -60,6 +61,7 @@ export default function WorkspacePage() {
   const { workspaceId = '' } = useParams();
   const query = useWorkspace(workspaceId);
   const [renaming, setRenaming] = useState(false);
+  useDocumentTitle(query.data?.workspace.name ?? (query.isError ? 'Workspace not found' : undefined));
 
   if (query.isPending) return <LoadingState label="Loading workspace…" />;
   if (query.isError) {

@@ -6,6 +6,7 @@ import { serverFieldErrors, validate, type FieldErrors } from '../../lib/forms';
 import { useMe } from '../../lib/session';
 import { Alert, Button, Card, EmptyState, LoadingState, PageHeader, QueryError, RoleBadge, TextAreaField, TextField } from '../../lib/ui';
 import { useCreateWorkspace, useWorkspaces } from './api';
+import { useDocumentTitle } from '../../lib/document-title';
 
 function CreateWorkspaceForm() {
   const create = useCreateWorkspace();
@@ -52,6 +53,7 @@ function CreateWorkspaceForm() {
 export default function WorkspacesPage() {
   const { data: user } = useMe();
   const workspaces = useWorkspaces();
+  useDocumentTitle('Workspaces');
 
   return (
     <div className="flex flex-col gap-8">
