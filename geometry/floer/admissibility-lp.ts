@@ -7,7 +7,7 @@
  * rule, which cannot cycle (Chvátal 1983, Linear Programming, ch. 3; Schrijver 1986, §11). A feasible basic
  * solution, scaled to integers, is the offending periodic domain. Polynomial in practice, exact always.
  */
-import { gcdBig, integerKernel, toIntMatrix } from '../algebra/integer-matrix.js';
+import { gcdBig, integerKernelBasis, toIntMatrix } from '../algebra/integer-matrix.js';
 
 /** Divides a row by the gcd of its entries. */
 function reduceRow(r: bigint[]): void {
@@ -71,9 +71,11 @@ function phaseOne(A: bigint[][], b: bigint[], maxPivots: number): bigint[] | nul
 export function nonNegativePeriodic(basis: Int32Array[], maxPivots = 100_000): Int32Array | null | 'undecided' {
   if (basis.length === 0) return null;
   const R = basis[0].length;
+  // Every element of the span has coefficient sum 0: a non-negative one must vanish.
+  if (basis.every((P) => P.reduce((x, y) => x + y, 0) === 0)) return null;
   const support = [...Array(R).keys()].filter((r) => basis.some((P) => P[r] !== 0));
   const B = toIntMatrix(basis.map((P) => support.map((r) => P[r])));
-  const N = integerKernel(B, support.length).H; // rows orthogonal to every P_k
+  const N = integerKernelBasis(B, support.length); // rows orthogonal to every P_k
   const A = [...N, support.map(() => 1n)];
   const rhs = [...N.map(() => 0n), 1n];
   const s = phaseOne(A, rhs, maxPivots);

@@ -84,17 +84,7 @@ export function domainLattice(comb: CombinatorialDiagram, blocked: BlockedBasepo
   }
   let scale = 1;
   for (let i = 0; i < rank; i++) { const d = toNum(snf!.diagonal[i]); scale = (scale / gcdN(scale, d)) * d; }
-  const partCols = new Float64Array(P * R);
-  if (snf) {
-    for (let i = 0; i < rank; i++) {
-      const f = BigInt(scale) / snf.diagonal[i];
-      for (let j = 0; j < n; j++) {
-        const v = snf.V[j][i] * f;
-        if (v === 0n) continue;
-        for (let p = 0; p < P; p++) if (snf.U[i][p] !== 0n) partCols[p * R + allowed[j]] += toNum(v * snf.U[i][p]);
-      }
-    }
-  }
+  const partCols = snf ? particularColumns(snf.U, snf.V, snf.diagonal, rank, scale, allowed, P, R) : new Float64Array(P * R);
   const ker = n === 0 ? { H: [], pivots: [] } : snf ? hermiteNormalForm(kernelFromV(snf.V, rank)) : integerKernel([], n);
   const periodic = ker.H.map((row) => {
     const full = new Int32Array(R);
@@ -105,6 +95,29 @@ export function domainLattice(comb: CombinatorialDiagram, blocked: BlockedBasepo
     comb, blockedRegion, allowed, obsRows: Float64Array.from(obs.flat()), obsMod: Float64Array.from(mods), partCols,
     scale, periodic, periodicPivots: ker.pivots.map((j) => allowed[j]),
   };
+}
+
+/**
+ * partCols[p*R + allowed[j]] = Σ_{i < rank} V[j][i] (L / d_i) U[i][p], in doubles over the non-zero entries
+ * only: O(Σ_i nnz(V col i) · nnz(U row i)). Entries are checked against 2^50.
+ */
+function particularColumns(U: IntMatrix, V: IntMatrix, d: bigint[], rank: number, scale: number, allowed: Int32Array, P: number, R: number): Float64Array {
+  const out = new Float64Array(P * R);
+  for (let i = 0; i < rank; i++) {
+    const f = scale / toNum(d[i]);
+    const up: number[] = [], uv: number[] = [];
+    for (let p = 0; p < P; p++) if (U[i][p] !== 0n) { up.push(p); uv.push(toNum(U[i][p])); }
+    for (let j = 0; j < V.length; j++) {
+      if (V[j][i] === 0n) continue;
+      const v = toNum(V[j][i]) * f, col = allowed[j];
+      for (let t = 0; t < up.length; t++) {
+        const idx = up[t] * R + col;
+        out[idx] += v * uv[t];
+        if (Math.abs(out[idx]) > SAFE) throw new RangeError('integer too large for the fast path');
+      }
+    }
+  }
+  return out;
 }
 
 function kernelFromV(V: IntMatrix, rank: number): IntMatrix {
