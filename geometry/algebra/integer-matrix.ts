@@ -131,7 +131,7 @@ export function smithNormalForm(a: IntMatrix): SmithForm {
       if (pos[0] !== t) { swapRows(A, t, pos[0]); swapRows(U, t, pos[0]); }
       if (pos[1] !== t) { swapCols(A, t, pos[1]); swapCols(V, t, pos[1]); }
       if (!clearCross(A, U, V, t)) continue;
-      const bad = findNonMultiple(A, t);
+      const bad = absBig(A[t][t]) === 1n ? -1 : findNonMultiple(A, t);
       if (bad < 0) break;
       addRow(A, t, bad, 1n); addRow(U, t, bad, 1n);
     }
