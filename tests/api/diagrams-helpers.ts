@@ -35,8 +35,9 @@ export function templateObj(template: TemplateSpec): string {
 }
 
 /** superagent parser that keeps a binary body as a Buffer. */
-export function binaryParser(res: NodeJS.ReadableStream & { setEncoding(e: string): void }, done: (err: Error | null, body: Buffer) => void): void {
+export function binaryParser(res: unknown, done: (err: Error | null, body: unknown) => void): void {
+  const stream = res as NodeJS.ReadableStream;
   const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => done(null, Buffer.concat(chunks)));
+  stream.on('data', (c: Buffer) => chunks.push(c));
+  stream.on('end', () => done(null, Buffer.concat(chunks)));
 }
