@@ -11,7 +11,7 @@ const COLUMNS: Column[] = [
   { key: 'name', label: 'Name' },
   { key: 'genus', label: 'Genus', numeric: true },
   { key: 'curveCount', label: 'Curves', numeric: true },
-  { key: 'intersectionCount', label: 'Intersection points', numeric: true },
+  { key: 'intersectionCount', label: 'Intersections', numeric: true },
   { key: 'generatorCount', label: 'Generators', numeric: true },
   { key: 'nice', label: 'Nice' },
   { key: 'weaklyAdmissible', label: 'Admissible' },
@@ -34,7 +34,7 @@ function compare(a: DiagramSummary, b: DiagramSummary, key: SortKey): number {
   return String(va).localeCompare(String(vb), undefined, { numeric: true, sensitivity: 'base' });
 }
 
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+const dateFormat = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });
 
 function YesNo({ value }: { value: boolean | null }) {
   if (value === null) return <span className="text-ink-faint">—</span>;
@@ -72,7 +72,7 @@ export function DiagramTable({ workspaceId, diagrams, canEdit, onRename, onDupli
             {COLUMNS.map((c) => {
               const active = sort.key === c.key;
               return (
-                <th key={c.key} scope="col" aria-sort={active ? (sort.dir === 1 ? 'ascending' : 'descending') : 'none'} className={`px-3 py-2 font-medium ${c.numeric ? 'text-right' : ''}`}>
+                <th key={c.key} scope="col" aria-sort={active ? (sort.dir === 1 ? 'ascending' : 'descending') : 'none'} className={`whitespace-nowrap px-2 py-2 font-medium ${c.numeric ? 'text-right' : ''}`}>
                   <button type="button" onClick={() => toggle(c.key)} className="inline-flex items-center gap-1 rounded hover:text-ink">
                     {c.label}
                     <span aria-hidden="true" className={active ? 'text-ink' : 'text-ink-faint/50'}>{active ? (sort.dir === 1 ? '▲' : '▼') : '↕'}</span>
@@ -80,7 +80,7 @@ export function DiagramTable({ workspaceId, diagrams, canEdit, onRename, onDupli
                 </th>
               );
             })}
-            <th scope="col" className="px-3 py-2 font-medium"><span className="sr-only">Actions</span></th>
+            <th scope="col" className="px-2 py-2 font-medium"><span className="sr-only">Actions</span></th>
           </tr>
         </thead>
         <tbody>
@@ -89,7 +89,7 @@ export function DiagramTable({ workspaceId, diagrams, canEdit, onRename, onDupli
             const stat = (v: React.ReactNode) => (analysing && v === null ? <span className="text-ink-faint">…</span> : v ?? <span className="text-ink-faint">—</span>);
             return (
               <tr key={d.id} className="border-t border-line hover:bg-paper" data-testid="diagram-row">
-                <td className="px-3 py-2">
+                <td className="px-2 py-2">
                   {renaming?.id === d.id ? (
                     <form
                       className="flex items-center gap-2"
@@ -118,23 +118,23 @@ export function DiagramTable({ workspaceId, diagrams, canEdit, onRename, onDupli
                     </div>
                   )}
                 </td>
-                <td className="px-3 py-2 text-right tabular-nums">{stat(d.genus)}</td>
-                <td className="px-3 py-2 text-right tabular-nums">{d.curveCount}</td>
-                <td className="px-3 py-2 text-right tabular-nums">{stat(d.intersectionCount)}</td>
-                <td className="px-3 py-2 text-right tabular-nums">{stat(d.generatorCount)}</td>
-                <td className="px-3 py-2">{analysing && d.nice === null ? <span className="text-ink-faint">…</span> : <YesNo value={d.nice} />}</td>
-                <td className="px-3 py-2">{analysing && d.weaklyAdmissible === null ? <span className="text-ink-faint">…</span> : <YesNo value={d.weaklyAdmissible} />}</td>
-                <td className="px-3 py-2 font-mono text-xs">{stat(d.h1)}</td>
-                <td className="px-3 py-2 text-ink-muted">
+                <td className="px-2 py-2 text-right tabular-nums">{stat(d.genus)}</td>
+                <td className="px-2 py-2 text-right tabular-nums">{d.curveCount}</td>
+                <td className="px-2 py-2 text-right tabular-nums">{stat(d.intersectionCount)}</td>
+                <td className="px-2 py-2 text-right tabular-nums">{stat(d.generatorCount)}</td>
+                <td className="px-2 py-2">{analysing && d.nice === null ? <span className="text-ink-faint">…</span> : <YesNo value={d.nice} />}</td>
+                <td className="px-2 py-2">{analysing && d.weaklyAdmissible === null ? <span className="text-ink-faint">…</span> : <YesNo value={d.weaklyAdmissible} />}</td>
+                <td className="px-2 py-2 font-mono text-xs">{stat(d.h1)}</td>
+                <td className="whitespace-nowrap px-2 py-2 text-ink-muted">
                   <time dateTime={d.updatedAt}>{dateFormat.format(new Date(d.updatedAt))}</time>
                   <span className="block text-xs">by {d.updatedBy.name}</span>
                 </td>
-                <td className="px-3 py-2">
+                <td className="px-2 py-2">
                   {canEdit && (
-                    <div className="flex justify-end gap-1">
-                      <Button size="sm" variant="ghost" onClick={() => setRenaming({ id: d.id, name: d.name })} aria-label={`Rename ${d.name}`}>Rename</Button>
-                      <Button size="sm" variant="ghost" onClick={() => onDuplicate(d)} loading={busyId === d.id} aria-label={`Duplicate ${d.name}`}>Duplicate</Button>
-                      <Button size="sm" variant="ghost" onClick={() => onDelete(d)} aria-label={`Delete ${d.name}`} className="hover:text-danger">Delete</Button>
+                    <div className="flex justify-end gap-0.5">
+                      <Button size="sm" variant="ghost" onClick={() => setRenaming({ id: d.id, name: d.name })} aria-label={`Rename ${d.name}`} className="px-2">Rename</Button>
+                      <Button size="sm" variant="ghost" onClick={() => onDuplicate(d)} loading={busyId === d.id} aria-label={`Duplicate ${d.name}`} className="px-2">Duplicate</Button>
+                      <Button size="sm" variant="ghost" onClick={() => onDelete(d)} aria-label={`Delete ${d.name}`} className="px-2 hover:text-danger">Delete</Button>
                     </div>
                   )}
                 </td>
