@@ -44,6 +44,19 @@ export function symmetricExtent(values: ArrayLike<number>): number {
 }
 
 /**
+ * A symmetric range that covers the q-quantile of |value| (q = 0.95 ignores a few spikes, so a heat map of
+ * curvature defects shows its pattern rather than one extreme vertex). O(n log n).
+ */
+export function robustExtent(values: ArrayLike<number>, q = 0.95): number {
+  const a: number[] = [];
+  for (let i = 0; i < values.length; i++) if (Number.isFinite(values[i])) a.push(Math.abs(values[i]));
+  if (a.length === 0) return 1;
+  a.sort((x, y) => x - y);
+  const m = a[Math.min(a.length - 1, Math.floor(q * (a.length - 1)))];
+  return m > 1e-12 ? m : symmetricExtent(values);
+}
+
+/**
  * Per-face colours (3 floats per face) from a per-region value: face f gets the colour of
  * value[faceRegion[f]] on the scale [−extent, extent]. Regions with NaN keep `neutral`. O(F).
  */

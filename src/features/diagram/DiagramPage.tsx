@@ -244,7 +244,7 @@ export default function DiagramPage() {
           <h1 className="truncate text-2xl font-semibold tracking-tight">{d.name}</h1>
           <p className="text-sm text-ink-muted">
             {rev !== null && (isHead ? `Revision ${rev} (latest)` : `Viewing revision ${rev}; the latest is ${head}.`)}
-            {result && ` · genus ${result.stats.genus} · ${result.stats.vertices} vertices, ${result.stats.faces} faces · ${result.curves.length} curves · ${result.intersections.length} intersection points · ${result.regions.length} regions`}
+            {result && ` · genus ${result.stats.genus} · ${result.stats.vertices} vertices, ${result.stats.faces} faces · ${result.curves.length} curves · ${result.intersections.length} intersection points · ${result.regions.length} region${result.regions.length === 1 ? '' : 's'}`}
             {floer && ` · H₁ = ${floer.h1}`}
           </p>
         </div>

@@ -4,7 +4,7 @@
  * Pure and cheap (O(F) per change), no three.js.
  */
 import { decodeFloat32Base64, decodeInt32Base64, type AnalysisResult, type MeshBinary } from '../../../server/contract/index.js';
-import { faceColorsFromRegions, hexToRgb, symmetricExtent, vertexColorsFromValues } from '../../viewer/color-scale';
+import { faceColorsFromRegions, hexToRgb, robustExtent, symmetricExtent, vertexColorsFromValues } from '../../viewer/color-scale';
 import type { ViewerCurve, ViewerPoint } from '../../viewer/types';
 import { basepointLabel, curveLabel, pointLabel } from './format';
 
@@ -79,8 +79,8 @@ export function coloring(
   if (!result || !index || mode === 'plain') return none;
   if (mode === 'defect') {
     const d = decodeFloat32Base64(result.vertexDefect);
-    const extent = symmetricExtent(d);
-    return { faceColors: null, vertexColors: vertexColorsFromValues(d, extent), legend: { title: 'Angle defect 2π − Σθ', extent, unit: 'rad' } };
+    const extent = robustExtent(d);
+    return { faceColors: null, vertexColors: vertexColorsFromValues(d, extent), legend: { title: 'Angle defect 2π − Σθ (95% of vertices within)', extent, unit: 'rad' } };
   }
   const n = result.regions.length;
   const values = new Float64Array(n);

@@ -42,7 +42,7 @@ export function GeneratorsPanel({ diagramId, revision, listed, total, onShow, sh
             <th scope="col" className="px-2 py-1.5 text-right">#</th>
             <th scope="col" className="px-2 py-1.5">Points</th>
             <th scope="col" className="px-2 py-1.5 text-right">Sign</th>
-            <th scope="col" className="px-2 py-1.5">Spin^c class</th>
+            <th scope="col" className="px-2 py-1.5">Spinᶜ class</th>
             <th scope="col" className="px-2 py-1.5 text-right">Relative grading</th>
           </tr>
         </thead>

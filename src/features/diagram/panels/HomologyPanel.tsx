@@ -19,7 +19,7 @@ function YesNo({ ok, yes, no }: { ok: boolean | null; yes: string; no: string })
 
 /**
  * H_1 (coker of the intersection matrix), periodic domains (≅ H_2, Ozsváth–Szabó 2004), weak admissibility
- * with its witness, niceness (Sarkar–Wang 2010) with the offending regions, and HF-hat ranks by spin^c class.
+ * with its witness, niceness (Sarkar–Wang 2010) with the offending regions, and HF-hat ranks by spinᶜ class.
  */
 export function HomologyPanel({ floer, unavailable, onShowPeriodic, onShowRegions, showing }: HomologyPanelProps) {
   if (!floer) return <p className="text-sm text-ink-muted">{unavailable ?? 'The Floer summary is not available for this revision.'}</p>;
@@ -96,11 +96,11 @@ export function HomologyPanel({ floer, unavailable, onShowPeriodic, onShowRegion
               )}
             </p>
             <div className="overflow-x-auto">
-              <table className="border-collapse text-xs" aria-label="HF-hat rank by spin^c class and relative grading">
+              <table className="border-collapse text-xs" aria-label="HF-hat rank by spinᶜ class and relative grading">
                 <caption className="caption-bottom pt-1 text-left text-ink-faint">Ranks by relative grading are of the complex’s homology (raw).</caption>
                 <thead className="bg-sunken text-ink-muted">
                   <tr>
-                    <th scope="col" className="px-2 py-1.5 text-left">Spin^c class</th>
+                    <th scope="col" className="px-2 py-1.5 text-left">Spinᶜ class</th>
                     <th scope="col" className="px-2 py-1.5 text-right">Generators</th>
                     <th scope="col" className="px-2 py-1.5 text-right">Rank</th>
                     {gradings.map((g) => <th key={g} scope="col" className="px-2 py-1.5 text-right">gr {g}{modulus ? ` mod ${modulus}` : ''}</th>)}
