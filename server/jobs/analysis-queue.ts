@@ -1,17 +1,16 @@
 /**
  * The analysis queue: a small in-process queue persisted in the `analyses` table (one row per revision,
  * status pending → running → done | failed). Jobs are claimed with `FOR UPDATE SKIP LOCKED`, so several
- * server processes may share one database. Computation runs in a worker thread (analysis-worker.ts) so big
+ * server processes may share one database. Computation runs in a worker thread (geometry-pool.ts) so big
  * meshes never block the HTTP event loop; progress goes to analyses.progress. At start, rows left
  * `running` by a stopped process go back to `pending` and everything pending is picked up again.
  */
-import { Worker } from 'node:worker_threads';
 import { and, eq, sql } from 'drizzle-orm';
 import type { Db } from '../db/client.js';
 import { analyses, diagramRevisions } from '../db/schema.js';
 import type { AppDeps } from '../deps.js';
-import { analyzeStored, type AnalysisOutcome, type ProgressFn } from './compute-analysis.js';
-import type { WorkerMessage, WorkerRequest } from './worker-protocol.js';
+import type { AnalysisOutcome, ProgressFn } from './compute-analysis.js';
+import { GeometryWorker } from './geometry-pool.js';
 
 export interface AnalysisQueueOptions {
   /** 'worker' (default) computes in a worker thread; 'inline' on the calling thread (scripts). */
@@ -21,25 +20,20 @@ export interface AnalysisQueueOptions {
   log?: (msg: string) => void;
 }
 
-type Row = { mesh: Buffer; curves: unknown; basepoints: unknown; vertexLabels: Buffer | null };
-
 /** Inserts the pending analysis row of a revision (idempotent). Call inside the revision's transaction. */
 export async function insertPendingAnalysis(db: Pick<Db, 'insert'>, revisionId: string): Promise<void> {
   await db.insert(analyses).values({ revisionId, status: 'pending', progress: 0 }).onConflictDoNothing();
 }
 
 export class AnalysisQueue {
-  private worker: Worker | null = null;
+  private readonly geo: GeometryWorker;
   private loopPromise: Promise<void> | null = null;
   private stopped = false;
   private again = false;
-  private readonly mode: 'worker' | 'inline';
-  private readonly timeoutMs: number;
   private readonly log: (msg: string) => void;
 
   constructor(private readonly db: Db, opts: AnalysisQueueOptions = {}) {
-    this.mode = opts.mode ?? 'worker';
-    this.timeoutMs = opts.jobTimeoutMs ?? 10 * 60_000;
+    this.geo = new GeometryWorker({ inline: opts.mode === 'inline', timeoutMs: opts.jobTimeoutMs ?? 10 * 60_000 });
     this.log = opts.log ?? ((m) => console.log(m));
   }
 
@@ -82,9 +76,7 @@ export class AnalysisQueue {
   async stop(): Promise<void> {
     this.stopped = true;
     await this.whenIdle();
-    const w = this.worker;
-    this.worker = null;
-    if (w) await w.terminate();
+    await this.geo.close();
   }
 
   private async loop(): Promise<void> {
@@ -123,7 +115,8 @@ export class AnalysisQueue {
         .where(and(eq(analyses.revisionId, revisionId), eq(analyses.status, 'running')))
         .catch(() => undefined);
     };
-    const outcome = this.mode === 'inline' ? analyzeStored(rows[0], progress) : await this.inWorker(revisionId, rows[0], progress);
+    const outcome: AnalysisOutcome = await this.geo.run({ type: 'analyze', row: rows[0] }, progress)
+      .catch((e: Error) => ({ ok: false as const, error: { message: e.message, problems: [] } }));
     await this.finish(revisionId, outcome);
   }
 
@@ -134,50 +127,6 @@ export class AnalysisQueue {
     } else {
       await this.db.update(analyses).set({ status: 'failed', progress: 1, result: null, error: outcome.error, finishedAt: new Date() }).where(where);
     }
-  }
-
-  private ensureWorker(): Worker {
-    if (this.worker) return this.worker;
-    const w = new Worker(new URL('./analysis-worker-boot.mjs', import.meta.url), { execArgv: [] });
-    w.unref();
-    this.worker = w;
-    return w;
-  }
-
-  /** Runs one job on the worker thread; a crash or timeout fails the job and restarts the thread. */
-  private inWorker(id: string, row: Row, progress: ProgressFn): Promise<AnalysisOutcome> {
-    const w = this.ensureWorker();
-    return new Promise<AnalysisOutcome>((resolve) => {
-      const failWith = (message: string) => {
-        cleanup();
-        if (this.worker === w) this.worker = null;
-        void w.terminate();
-        resolve({ ok: false, error: { message, problems: [] } });
-      };
-      const onMessage = (m: WorkerMessage) => {
-        if (m.id !== id) return;
-        if (m.type === 'progress') progress(m.fraction, m.stage);
-        else {
-          cleanup();
-          resolve(m.outcome);
-        }
-      };
-      const onError = (err: Error) => failWith(`The analysis stopped: ${err.message}`);
-      const onExit = (code: number) => failWith(`The analysis worker exited (code ${code}); the diagram may be too large.`);
-      const timer = setTimeout(() => failWith(`The analysis took longer than ${Math.round(this.timeoutMs / 1000)} s and was stopped.`), this.timeoutMs);
-      timer.unref();
-      const cleanup = () => {
-        clearTimeout(timer);
-        w.off('message', onMessage);
-        w.off('error', onError);
-        w.off('exit', onExit);
-      };
-      w.on('message', onMessage);
-      w.on('error', onError);
-      w.on('exit', onExit);
-      const req: WorkerRequest = { id, row: { mesh: row.mesh, curves: row.curves, basepoints: row.basepoints, vertexLabels: row.vertexLabels } };
-      w.postMessage(req);
-    });
   }
 }
 
@@ -194,4 +143,18 @@ export function analysisQueueFor(deps: Pick<AppDeps, 'db' | 'onClose'>): Analysi
     void queue.start().catch((err: unknown) => console.error(`[analysis] start failed: ${err instanceof Error ? err.message : String(err)}`));
   }
   return q;
+}
+
+const workers = new WeakMap<Db, GeometryWorker>();
+
+/** The app's worker for interactive geometry (templates, uploads, edits, exports), apart from analyses. */
+export function geometryWorkerFor(deps: Pick<AppDeps, 'db' | 'onClose'>): GeometryWorker {
+  let w = workers.get(deps.db);
+  if (!w) {
+    const worker = new GeometryWorker({ timeoutMs: 5 * 60_000 });
+    w = worker;
+    workers.set(deps.db, worker);
+    deps.onClose(() => worker.close());
+  }
+  return w;
 }

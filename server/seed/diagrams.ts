@@ -12,6 +12,7 @@ import { analyses, diagramRevisions, diagrams } from '../db/schema.js';
 import { AnalysisQueue } from '../jobs/analysis-queue.js';
 import { appendRevision, createDiagram } from '../routes/diagrams/diagrams.service.js';
 import { applyOperation } from '../routes/diagrams/operations.js';
+import { storeDiagram } from '../routes/diagrams/storage.js';
 import { saveDomain } from '../routes/domains/domains.service.js';
 import type { DemoSeed } from './demo.js';
 
@@ -79,12 +80,12 @@ export async function seedDemoDiagrams(db: Db, demo: DemoSeed, log: (m: string) 
     }
     const id = await createDiagram(db, {
       workspaceId: demo.workspaceId, userId: demo.userIds[d.author], name: d.name, description: d.description,
-      diagram: built.value, operation: { type: 'template', template: d.template }, message: 'Created from a template',
+      stored: storeDiagram(built.value), operation: { type: 'template', template: d.template }, message: 'Created from a template',
     });
     if (d.edit) {
       const next = applyOperation(built.value, d.edit.operation);
       if (next.ok) {
-        await appendRevision(db, { diagramId: id, base: 1, userId: demo.userIds[d.edit.by], diagram: next.value, operation: d.edit.operation, message: d.edit.message });
+        await appendRevision(db, { diagramId: id, base: 1, userId: demo.userIds[d.edit.by], stored: storeDiagram(next.value), operation: d.edit.operation, message: d.edit.message });
       }
     }
     created.push({ d, id });

@@ -18,9 +18,6 @@
 import { Router, type Request, type Response } from 'express';
 import multer from 'multer';
 import {
-  buildTemplate, parseDiagramFile, writeObj, writeOff, writePly, writeStl,
-} from '../../../geometry/index.js';
-import {
   createDiagramRequestSchema, duplicateDiagramRequestSchema, editRequestSchema, exportFormatSchema,
   generatorsQuerySchema, MAX_UPLOAD_BYTES, MESH_CONTENT_TYPE, restoreRequestSchema, updateDiagramRequestSchema,
   uploadDiagramFieldsSchema,
@@ -28,15 +25,16 @@ import {
 import { requireUser, requireWorkspaceRole } from '../../auth/index.js';
 import type { AppDeps } from '../../deps.js';
 import { HttpError, parseOr400 } from '../../http/errors.js';
-import { analysisQueueFor } from '../../jobs/analysis-queue.js';
+import { analysisQueueFor, geometryWorkerFor } from '../../jobs/analysis-queue.js';
+import { storedFromWire, type BuildOutcome } from '../../jobs/geometry-tasks.js';
 import { combinatorialFromResult } from '../../jobs/compute-analysis.js';
 import { generatorsPageFor } from '../../jobs/floer-adapter.js';
 import {
   accessDiagram, analysisOf, appendRevision, createDiagram, doneResult, duplicateDiagram, getDiagram, listDiagrams,
   listRevisions, renameDiagram, restoreRevision, revisionId, revisionRow, softDelete, undelete,
 } from './diagrams.service.js';
-import { applyOperation, describeOperation } from './operations.js';
-import { loadDiagram, wireMesh } from './storage.js';
+import { describeOperation } from './operations.js';
+import type { StoredDiagram, StoredRow } from './storage.js';
 import { problemDetails, Unprocessable, unprocessableHandler } from './unprocessable.js';
 
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 10 } });
@@ -57,17 +55,21 @@ function receiveFile(req: Request, res: Response): Promise<void> {
 
 /** Small LRU of encoded meshes (revisions are immutable, so entries never go stale). */
 const meshCache = new Map<string, Buffer>();
-export function cachedWireMesh(id: string, row: Parameters<typeof wireMesh>[0]): Buffer {
-  let buf = meshCache.get(id);
-  if (buf) {
+const MESH_CACHE_BYTES = 256 * 1024 * 1024;
+
+async function cachedWireMesh(deps: AppDeps, id: string, row: StoredRow): Promise<Buffer> {
+  const hit = meshCache.get(id);
+  if (hit) {
     meshCache.delete(id);
-  } else {
-    buf = wireMesh(row);
+    meshCache.set(id, hit);
+    return hit;
   }
+  const out = await geometryWorkerFor(deps).run({ type: 'wire-mesh', row });
+  const buf = Buffer.from(out.bytes as Uint8Array);
   meshCache.set(id, buf);
   let bytes = 0;
   for (const b of meshCache.values()) bytes += b.length;
-  while (meshCache.size > 1 && bytes > 256 * 1024 * 1024) {
+  while (meshCache.size > 1 && bytes > MESH_CACHE_BYTES) {
     const [k, b] = meshCache.entries().next().value as [string, Buffer];
     meshCache.delete(k);
     bytes -= b.length;
@@ -75,8 +77,8 @@ export function cachedWireMesh(id: string, row: Parameters<typeof wireMesh>[0]):
   return buf;
 }
 
-/** Sends an immutable mesh binary with ETag / 304 handling. */
-export async function sendMesh(req: Request, res: Response, rev: Awaited<ReturnType<typeof revisionRow>>, cache: string): Promise<void> {
+/** Sends a revision's mesh binary with ETag / 304 handling (the bytes are made in the geometry worker). */
+export async function sendMesh(deps: AppDeps, req: Request, res: Response, rev: Awaited<ReturnType<typeof revisionRow>>, cache: string): Promise<void> {
   const etag = `"qdm1-${rev.id}"`;
   res.set('ETag', etag);
   res.set('Cache-Control', cache);
@@ -84,8 +86,18 @@ export async function sendMesh(req: Request, res: Response, rev: Awaited<ReturnT
     res.status(304).end();
     return;
   }
-  res.type(MESH_CONTENT_TYPE).send(cachedWireMesh(rev.id, rev));
+  res.type(MESH_CONTENT_TYPE).send(await cachedWireMesh(deps, rev.id, rev));
 }
+
+/** The stored diagram of a build task, or 422 invalid_operation / invalid_file with the geometry's words. */
+function builtOr422(out: BuildOutcome, code: 'invalid_file' | 'invalid_operation', what: string): { stored: StoredDiagram; warnings: string[] } {
+  if (out.ok) return { stored: storedFromWire(out.stored), warnings: out.warnings };
+  const first = out.problems[0];
+  const where = first?.line !== undefined ? ` (line ${first.line})` : first?.offset !== undefined ? ` (byte ${first.offset})` : '';
+  throw new Unprocessable(code, `${what}${where}: ${first?.message ?? 'unknown problem'}`, problemDetails(out.problems));
+}
+
+const EXPORT_TYPES = { obj: 'model/obj', off: 'text/plain', ply: 'application/octet-stream', stl: 'model/stl' } as const;
 
 const slug = (s: string) => s.normalize('NFKD').replace(/[^\w-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 60) || 'diagram';
 
@@ -93,6 +105,7 @@ export function diagramsRouter(deps: AppDeps): Router {
   const r = Router();
   const { db } = deps;
   const queue = analysisQueueFor(deps);
+  const geo = geometryWorkerFor(deps);
   const uid = (req: Request) => req.user!.id;
 
   r.get('/workspaces/:workspaceId/diagrams', requireWorkspaceRole('viewer'), async (req, res) => {
@@ -102,11 +115,10 @@ export function diagramsRouter(deps: AppDeps): Router {
 
   r.post('/workspaces/:workspaceId/diagrams', requireWorkspaceRole('editor'), async (req, res) => {
     const input = parseOr400(createDiagramRequestSchema, req.body);
-    const built = buildTemplate({ ...input.template, ...(input.resolution ? { resolution: input.resolution } : {}) });
-    if (!built.ok) throw new Unprocessable('invalid_operation', `The template cannot be built: ${built.errors[0]?.message}`, problemDetails(built.errors));
+    const built = builtOr422(await geo.run({ type: 'template', template: input.template, resolution: input.resolution }), 'invalid_operation', 'The template cannot be built');
     const id = await createDiagram(db, {
       workspaceId: req.params.workspaceId as string, userId: uid(req), name: input.name, description: input.description,
-      diagram: built.value, operation: { type: 'template', template: input.template }, message: 'Created from a template',
+      stored: built.stored, operation: { type: 'template', template: input.template }, message: 'Created from a template',
     });
     queue.kick();
     res.status(201).json({ diagram: await getDiagram(db, id, req.workspaceRole!) });
@@ -117,18 +129,14 @@ export function diagramsRouter(deps: AppDeps): Router {
     const fields = parseOr400(uploadDiagramFieldsSchema, req.body ?? {});
     const file = req.file;
     if (!file) throw new HttpError('validation', 'file: Attach a diagram file (OBJ, PLY, OFF or STL) in the field “file”.');
-    const parsed = parseDiagramFile(file.originalname, new Uint8Array(file.buffer.buffer, file.buffer.byteOffset, file.buffer.byteLength));
-    if (!parsed.ok) {
-      const first = parsed.errors[0];
-      const where = first?.line !== undefined ? ` (line ${first.line})` : first?.offset !== undefined ? ` (byte ${first.offset})` : '';
-      throw new Unprocessable('invalid_file', `${file.originalname} cannot be used${where}: ${first?.message ?? 'unknown problem'}`, problemDetails(parsed.errors));
-    }
+    const bytes = new Uint8Array(file.buffer.buffer, file.buffer.byteOffset, file.buffer.byteLength);
+    const parsed = builtOr422(await geo.run({ type: 'upload', fileName: file.originalname, bytes }), 'invalid_file', `${file.originalname} cannot be used`);
     const id = await createDiagram(db, {
       workspaceId: req.params.workspaceId as string, userId: uid(req), name: fields.name, description: fields.description,
-      diagram: parsed.value.diagram, operation: { type: 'upload', fileName: file.originalname.slice(0, 200) }, message: `Uploaded ${file.originalname.slice(0, 200)}`,
+      stored: parsed.stored, operation: { type: 'upload', fileName: file.originalname.slice(0, 200) }, message: `Uploaded ${file.originalname.slice(0, 200)}`,
     });
     queue.kick();
-    res.status(201).json({ diagram: await getDiagram(db, id, req.workspaceRole!), warnings: parsed.value.warnings.map((w) => w.message) });
+    res.status(201).json({ diagram: await getDiagram(db, id, req.workspaceRole!), warnings: parsed.warnings });
   });
 
   r.get('/diagrams/:diagramId', requireUser, async (req, res) => {
@@ -170,7 +178,7 @@ export function diagramsRouter(deps: AppDeps): Router {
 
   r.get('/diagrams/:diagramId/revisions/:n/mesh', requireUser, async (req, res) => {
     const { diagram } = await accessDiagram(db, uid(req), req.params.diagramId, 'viewer');
-    await sendMesh(req, res, await revisionRow(db, diagram.id, req.params.n), 'private, max-age=31536000, immutable');
+    await sendMesh(deps, req, res, await revisionRow(db, diagram.id, req.params.n), 'private, max-age=31536000, immutable');
   });
 
   r.get('/diagrams/:diagramId/revisions/:n/analysis', requireUser, async (req, res) => {
@@ -192,13 +200,10 @@ export function diagramsRouter(deps: AppDeps): Router {
     const { diagram } = await accessDiagram(db, uid(req), req.params.diagramId, 'viewer');
     const format = parseOr400(exportFormatSchema, req.query.format ?? 'obj');
     const row = await revisionRow(db, diagram.id, req.params.n);
-    const d = loadDiagram(row);
+    const out = await geo.run({ type: 'export', row, format, title: `Quadrant: ${diagram.name}, revision ${row.number}` });
     const name = `${slug(diagram.name)}-r${row.number}.${format}`;
     res.set('Content-Disposition', `attachment; filename="${name}"`);
-    if (format === 'obj') res.type('model/obj').send(writeObj(d, `Quadrant: ${diagram.name}, revision ${row.number}`));
-    else if (format === 'off') res.type('text/plain').send(writeOff(d.mesh));
-    else if (format === 'ply') res.type('application/octet-stream').send(Buffer.from(writePly(d)));
-    else res.type('model/stl').send(Buffer.from(writeStl(d.mesh)));
+    res.type(EXPORT_TYPES[format]).send(typeof out.bytes === 'string' ? out.bytes : Buffer.from(out.bytes.buffer, out.bytes.byteOffset, out.bytes.byteLength));
   });
 
   r.post('/diagrams/:diagramId/edits', requireUser, async (req, res) => {
@@ -207,11 +212,10 @@ export function diagramsRouter(deps: AppDeps): Router {
     if (input.baseRevision !== diagram.headRevision) {
       throw new HttpError('conflict', `This diagram changed since you started (revision ${diagram.headRevision} is now current). Reload it and apply your change again.`);
     }
-    const base = loadDiagram(await revisionRow(db, diagram.id, input.baseRevision));
-    const next = applyOperation(base, input.operation);
-    if (!next.ok) throw new Unprocessable('invalid_operation', `The ${input.operation.type} cannot be applied: ${next.errors[0]?.message ?? 'unknown problem'}`, problemDetails(next.errors));
+    const row = await revisionRow(db, diagram.id, input.baseRevision);
+    const next = builtOr422(await geo.run({ type: 'edit', row, operation: input.operation }), 'invalid_operation', `The ${input.operation.type} cannot be applied`);
     const number = await appendRevision(db, {
-      diagramId: diagram.id, base: input.baseRevision, userId: uid(req), diagram: next.value, operation: input.operation,
+      diagramId: diagram.id, base: input.baseRevision, userId: uid(req), stored: next.stored, operation: input.operation,
       message: input.message || describeOperation(input.operation),
     });
     queue.kick();

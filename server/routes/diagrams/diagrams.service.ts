@@ -5,7 +5,6 @@
  * (restore, duplicate) copies that analysis when it is done, so nothing is computed twice.
  */
 import { and, desc, eq, isNull, isNotNull, sql } from 'drizzle-orm';
-import type { HeegaardDiagram } from '../../../geometry/index.js';
 import type { Role } from '../../contract/workspaces.js';
 import type {
   AnalysisResponse, AnalysisResult, AnalysisStatus, Diagram, DiagramSummary, Revision, RevisionOperation,
@@ -14,7 +13,7 @@ import { assertRole, isUuid, workspaceRoleOf } from '../../auth/index.js';
 import type { Db } from '../../db/client.js';
 import { analyses, diagramRevisions, diagrams } from '../../db/schema.js';
 import { HttpError } from '../../http/errors.js';
-import { storeDiagram } from './storage.js';
+import type { StoredDiagram } from './storage.js';
 
 /** Shown for authors whose account is gone. */
 const FORMER = { id: '00000000-0000-4000-8000-000000000000', name: 'Former member' };
@@ -121,8 +120,7 @@ export async function getDiagram(db: Db, diagramId: string, role: Role): Promise
 
 /** Inserts revision `number` of a diagram with its pending analysis. Returns the revision id. */
 async function insertRevision(tx: Tx, diagramId: string, number: number, parent: number | null, userId: string,
-  d: HeegaardDiagram, operation: RevisionOperation, message: string): Promise<string> {
-  const stored = storeDiagram(d);
+  stored: StoredDiagram, operation: RevisionOperation, message: string): Promise<string> {
   const [rev] = await tx.insert(diagramRevisions).values({
     diagramId, number, parentNumber: parent, authorId: userId, message, operation,
     mesh: stored.mesh, curves: stored.curves, basepoints: stored.basepoints, vertexLabels: stored.vertexLabels, stats: stored.stats,
@@ -133,7 +131,7 @@ async function insertRevision(tx: Tx, diagramId: string, number: number, parent:
 
 /** A new diagram with revision 1. */
 export async function createDiagram(db: Db, input: {
-  workspaceId: string; userId: string; name: string; description?: string; diagram: HeegaardDiagram;
+  workspaceId: string; userId: string; name: string; description?: string; stored: StoredDiagram;
   operation: RevisionOperation; message: string;
 }): Promise<string> {
   return db.transaction(async (tx) => {
@@ -141,7 +139,7 @@ export async function createDiagram(db: Db, input: {
       workspaceId: input.workspaceId, name: input.name, description: input.description ?? '',
       createdBy: input.userId, updatedBy: input.userId, headRevision: 1,
     }).returning({ id: diagrams.id });
-    await insertRevision(tx, row.id, 1, null, input.userId, input.diagram, input.operation, input.message);
+    await insertRevision(tx, row.id, 1, null, input.userId, input.stored, input.operation, input.message);
     return row.id;
   });
 }
@@ -163,11 +161,11 @@ async function bumpHead(tx: Tx, diagramId: string, number: number, userId: strin
 
 /** Appends a revision computed from `base`; 409 when base is no longer the head. */
 export async function appendRevision(db: Db, input: {
-  diagramId: string; base: number; userId: string; diagram: HeegaardDiagram; operation: RevisionOperation; message: string;
+  diagramId: string; base: number; userId: string; stored: StoredDiagram; operation: RevisionOperation; message: string;
 }): Promise<number> {
   return db.transaction(async (tx) => {
     const head = await lockHead(tx, input.diagramId, input.base);
-    await insertRevision(tx, input.diagramId, head + 1, head, input.userId, input.diagram, input.operation, input.message);
+    await insertRevision(tx, input.diagramId, head + 1, head, input.userId, input.stored, input.operation, input.message);
     await bumpHead(tx, input.diagramId, head + 1, input.userId);
     return head + 1;
   });

@@ -1,11 +1,13 @@
 /**
  * 422 answers of the lab routes (invalid_file for uploads, invalid_operation for edits the geometry refuses).
  * The shared error middleware knows only ERROR_STATUS codes, so these routers answer 422 themselves through
- * `unprocessableHandler`, keeping the `{ error: { code, message, details } }` envelope.
+ * `unprocessableHandler`, keeping the `{ error: { code, message, details } }` envelope. A geometry worker
+ * crash or timeout answers 503 unavailable with the reason.
  */
 import type { ErrorRequestHandler } from 'express';
 import type { Problem } from '../../../geometry/index.js';
 import type { FileProblem } from '../../contract/diagrams.js';
+import { GeometryTaskError } from '../../jobs/geometry-pool.js';
 
 export class Unprocessable extends Error {
   constructor(readonly code: 'invalid_file' | 'invalid_operation', message: string, readonly details: FileProblem[]) {
@@ -23,6 +25,10 @@ export function problemDetails(problems: Problem[]): FileProblem[] {
 }
 
 export const unprocessableHandler: ErrorRequestHandler = (err, _req, res, next) => {
+  if (err instanceof GeometryTaskError) {
+    res.status(503).json({ error: { code: 'unavailable', message: err.message } });
+    return;
+  }
   if (!(err instanceof Unprocessable)) {
     next(err);
     return;

@@ -95,7 +95,7 @@ export function sharesRouter(deps: AppDeps): Router {
   r.get('/share/:token/mesh', async (req, res) => {
     const d = await sharedDiagram(db, req.params.token);
     // The head may move on, so the client revalidates (cheap 304 by ETag) instead of caching for a year.
-    await sendMesh(req, res, await revisionRow(db, d.id, d.headRevision), 'private, no-cache');
+    await sendMesh(deps, req, res, await revisionRow(db, d.id, d.headRevision), 'private, no-cache');
   });
 
   return r;
