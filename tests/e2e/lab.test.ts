@@ -112,7 +112,7 @@ describe('the lab in a browser', () => {
   it('builds a bigon domain on S¹×S² by clicking the surface and reads μ = 1', async () => {
     await openLibrary(s, libraryUrl);
     await createFromTemplate(s, async (page) => {
-      await page.getByLabel('Template').selectOption('s1xs2');
+      await page.getByLabel('Template', { exact: true }).selectOption('s1xs2');
       await expect(page.getByLabel('Genus g').inputValue()).resolves.toBe('1');
     });
     await regionRows(s.page);

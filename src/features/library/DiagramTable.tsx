@@ -89,7 +89,7 @@ export function DiagramTable({ workspaceId, diagrams, canEdit, onRename, onDupli
             const stat = (v: React.ReactNode) => (analysing && v === null ? <span className="text-ink-faint">…</span> : v ?? <span className="text-ink-faint">—</span>);
             return (
               <tr key={d.id} className="border-t border-line hover:bg-paper" data-testid="diagram-row">
-                <td className="px-2 py-2">
+                <td className="min-w-[11rem] px-2 py-2">
                   {renaming?.id === d.id ? (
                     <form
                       className="flex items-center gap-2"

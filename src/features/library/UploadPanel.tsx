@@ -105,7 +105,7 @@ export function UploadPanel({ workspaceId, onDone }: { workspaceId: string; onDo
                 <li key={i}>
                   {p.line !== undefined && <span className="font-mono font-semibold">Line {p.line}: </span>}
                   {p.offset !== undefined && p.line === undefined && <span className="font-mono font-semibold">Byte {p.offset}: </span>}
-                  {p.message}
+                  {p.line !== undefined ? p.message.replace(/^\s*line\s+\d+\s*[:,]\s*/i, '') : p.message}
                 </li>
               ))}
             </ul>

@@ -33,16 +33,16 @@ export function RegionsPanel({ regions, hover, selected, onHover, onSelect }: Re
         <table className="w-full border-collapse text-xs" aria-label="Regions">
           <thead className="sticky top-0 bg-sunken text-left text-ink-muted">
             <tr>
-              <th scope="col" className="px-2 py-1.5">Region</th>
-              <th scope="col" className="px-2 py-1.5 text-right">χ</th>
-              <th scope="col" className="px-2 py-1.5 text-right" title="convex / reflex corners">Corners</th>
-              <th scope="col" className="px-2 py-1.5 text-right">e (corners)</th>
-              <th scope="col" className="px-2 py-1.5 text-right">e (Gauss–Bonnet)</th>
-              <th scope="col" className="px-2 py-1.5 text-right" title="Σ interior angle defects, radians">Interior</th>
-              <th scope="col" className="px-2 py-1.5 text-right" title="Σ boundary turning, radians">Boundary</th>
-              <th scope="col" className="px-2 py-1.5 text-right" title="Σ corner terms, radians">Corner terms</th>
-              <th scope="col" className="px-2 py-1.5 text-right">Difference</th>
-              <th scope="col" className="px-2 py-1.5">Basepoints</th>
+              <th scope="col" className="px-1.5 py-1.5">Region</th>
+              <th scope="col" className="px-1.5 py-1.5">Basepoints</th>
+              <th scope="col" className="px-1.5 py-1.5 text-right">χ</th>
+              <th scope="col" className="px-1.5 py-1.5 text-right" title="convex / reflex corners">Corners</th>
+              <th scope="col" className="px-1.5 py-1.5 text-right" title="Euler measure by the corner formula">e corners</th>
+              <th scope="col" className="px-1.5 py-1.5 text-right" title="Euler measure by discrete Gauss–Bonnet">e GB</th>
+              <th scope="col" className="px-1.5 py-1.5 text-right" title="Σ interior angle defects, radians">Interior</th>
+              <th scope="col" className="px-1.5 py-1.5 text-right" title="Σ boundary turning, radians">Boundary</th>
+              <th scope="col" className="px-1.5 py-1.5 text-right" title="Σ corner terms, radians">Corner terms</th>
+              <th scope="col" className="px-1.5 py-1.5 text-right">Difference</th>
             </tr>
           </thead>
           <tbody ref={body}>
@@ -59,22 +59,22 @@ export function RegionsPanel({ regions, hover, selected, onHover, onSelect }: Re
                   onClick={() => onSelect(f)}
                   aria-selected={selected?.kind === 'region' && selected.id === r.id}
                 >
-                  <th scope="row" className="px-2 py-1 text-left font-medium">
+                  <th scope="row" className="px-1.5 py-1 text-left font-medium">
                     <button type="button" className="rounded" onFocus={() => onHover(f)} onBlur={() => onHover(null)} onClick={(e) => { e.stopPropagation(); onSelect(f); }}>
                       {regionLabel(r.id)}
                     </button>
                   </th>
-                  <td className="px-2 py-1 text-right tabular-nums">{r.chi}</td>
-                  <td className="px-2 py-1 text-right tabular-nums">{r.convexCorners}{r.reflexCorners ? ` / ${r.reflexCorners}` : ''}</td>
-                  <td className="px-2 py-1 text-right tabular-nums" data-col="euler">{fractionText(r.eulerMeasure)}</td>
-                  <td className="px-2 py-1 text-right tabular-nums" data-col="euler-gb" title={String(r.geometricEulerMeasure)}>{decimalText(r.geometricEulerMeasure)}</td>
-                  <td className="px-2 py-1 text-right tabular-nums">{decimalText(r.curvature.interior, 3)}</td>
-                  <td className="px-2 py-1 text-right tabular-nums">{decimalText(r.curvature.boundary, 3)}</td>
-                  <td className="px-2 py-1 text-right tabular-nums">{decimalText(r.curvature.corners, 3)}</td>
-                  <td className={`px-2 py-1 text-right tabular-nums ${Math.abs(r.difference) > 1e-6 ? 'font-semibold text-danger' : 'text-ink-muted'}`}>
+                  <td className="px-1.5 py-1">{basepointNames(r.basepoints) || <span className="text-ink-faint">—</span>}</td>
+                  <td className="px-1.5 py-1 text-right tabular-nums">{r.chi}</td>
+                  <td className="px-1.5 py-1 text-right tabular-nums">{r.convexCorners}{r.reflexCorners ? ` / ${r.reflexCorners}` : ''}</td>
+                  <td className="px-1.5 py-1 text-right tabular-nums" data-col="euler">{fractionText(r.eulerMeasure)}</td>
+                  <td className="px-1.5 py-1 text-right tabular-nums" data-col="euler-gb" title={String(r.geometricEulerMeasure)}>{decimalText(r.geometricEulerMeasure)}</td>
+                  <td className="px-1.5 py-1 text-right tabular-nums">{decimalText(r.curvature.interior, 3)}</td>
+                  <td className="px-1.5 py-1 text-right tabular-nums">{decimalText(r.curvature.boundary, 3)}</td>
+                  <td className="px-1.5 py-1 text-right tabular-nums">{decimalText(r.curvature.corners, 3)}</td>
+                  <td className={`px-1.5 py-1 text-right tabular-nums ${Math.abs(r.difference) > 1e-6 ? 'font-semibold text-danger' : 'text-ink-muted'}`}>
                     {Math.abs(r.difference) < 1e-9 ? '0' : r.difference.toExponential(1)}
                   </td>
-                  <td className="px-2 py-1">{basepointNames(r.basepoints) || <span className="text-ink-faint">—</span>}</td>
                 </tr>
               );
             })}
