@@ -70,6 +70,8 @@ export const SHARE_CLIENT_PATH = '/s';
 export const MAX_UPLOAD_BYTES = 50 * 1024 * 1024;
 /** Largest generator page. */
 export const MAX_GENERATOR_PAGE = 200;
+/** Largest generator offset (pages are enumerated in order; beyond this the list is not browsable). */
+export const MAX_GENERATOR_OFFSET = 1_000_000;
 /** Content type of the mesh binary. */
 export const MESH_CONTENT_TYPE = 'application/octet-stream';
 
@@ -439,7 +441,7 @@ export type AnalysisResponse = z.infer<typeof analysisResponseSchema>;
 // ---------------------------------------------------------------------------------------------------------
 
 export const generatorsQuerySchema = z.object({
-  offset: z.coerce.number().int().min(0).default(0),
+  offset: z.coerce.number().int().min(0).max(MAX_GENERATOR_OFFSET).default(0),
   limit: z.coerce.number().int().min(1).max(MAX_GENERATOR_PAGE).default(50),
 });
 export type GeneratorsQuery = z.infer<typeof generatorsQuerySchema>;

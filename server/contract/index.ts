@@ -68,7 +68,7 @@ export { HEALTH_PATH, healthResponseSchema, type HealthResponse } from './health
 export { DEV_MAIL_PATH, devMailResponseSchema, type DevMailResponse } from './dev.js';
 // --- diagrams (lab-server helper adds its exports here) ---
 export {
-  DIAGRAM_PATHS, SHARE_CLIENT_PATH, MAX_UPLOAD_BYTES, MAX_GENERATOR_PAGE, MESH_CONTENT_TYPE, INVALID_FILE_STATUS,
+  DIAGRAM_PATHS, SHARE_CLIENT_PATH, MAX_UPLOAD_BYTES, MAX_GENERATOR_PAGE, MAX_GENERATOR_OFFSET, MESH_CONTENT_TYPE, INVALID_FILE_STATUS,
   curveFamilySchema, basepointKindSchema, curveRefSchema, basepointRefSchema, surfacePointSchema, personSchema,
   analysisStatusSchema, exportFormatSchema, templateSpecSchema, editOperationSchema, revisionOperationSchema,
   diagramSummarySchema, diagramListResponseSchema, diagramSchema, diagramResponseSchema, createDiagramRequestSchema,

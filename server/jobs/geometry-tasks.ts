@@ -6,10 +6,11 @@
 import {
   buildTemplate, parseDiagramFile, writeObj, writeOff, writePly, writeStl, type Problem,
 } from '../../geometry/index.js';
-import type { EditOperation, ExportFormat, TemplateSpec } from '../contract/diagrams.js';
+import type { AnalysisResult, EditOperation, ExportFormat, GeneratorsPageResponse, TemplateSpec } from '../contract/diagrams.js';
 import { applyOperation } from '../routes/diagrams/operations.js';
 import { loadDiagram, storeDiagram, wireMesh, type StoredDiagram, type StoredRow } from '../routes/diagrams/storage.js';
-import { analyzeStored, type AnalysisOutcome, type ProgressFn } from './compute-analysis.js';
+import { analyzeStored, combinatorialFromResult, type AnalysisOutcome, type ProgressFn } from './compute-analysis.js';
+import { generatorsPageFor } from './floer-adapter.js';
 
 /** Stored revision columns as they cross a thread boundary. */
 export interface WireRow {
@@ -25,7 +26,9 @@ export type GeometryTask =
   | { type: 'upload'; fileName: string; bytes: Uint8Array }
   | { type: 'edit'; row: WireRow; operation: EditOperation }
   | { type: 'export'; row: WireRow; format: ExportFormat; title: string }
-  | { type: 'wire-mesh'; row: WireRow };
+  | { type: 'wire-mesh'; row: WireRow }
+  /** A generator page; `cacheKey` (the revision id) keys the worker's cache of classified generators. */
+  | { type: 'generators'; cacheKey: string; result: Pick<AnalysisResult, 'stats' | 'curves' | 'basepoints' | 'intersections' | 'regions'>; offset: number; limit: number };
 
 /** A new diagram ready for the database, or the geometry's problems. */
 export type BuildOutcome = { ok: true; stored: StoredDiagram; warnings: string[] } | { ok: false; problems: Problem[] };
@@ -34,7 +37,8 @@ export type BytesOutcome = { ok: true; bytes: Uint8Array | string };
 export type TaskOutcome<T extends GeometryTask> =
   T extends { type: 'analyze' } ? AnalysisOutcome
     : T extends { type: 'template' | 'upload' | 'edit' } ? BuildOutcome
-      : BytesOutcome;
+      : T extends { type: 'generators' } ? GeneratorsPageResponse
+        : BytesOutcome;
 
 export const asBuffer = (u: Uint8Array): Buffer => (Buffer.isBuffer(u) ? u : Buffer.from(u.buffer, u.byteOffset, u.byteLength));
 
@@ -48,7 +52,7 @@ export function storedFromWire(s: StoredDiagram): StoredDiagram {
 }
 
 /** Runs one task on the calling thread. Never throws for user data. */
-export function runGeometryTask(task: GeometryTask, progress: ProgressFn = () => undefined): AnalysisOutcome | BuildOutcome | BytesOutcome {
+export function runGeometryTask(task: GeometryTask, progress: ProgressFn = () => undefined): AnalysisOutcome | BuildOutcome | BytesOutcome | GeneratorsPageResponse {
   switch (task.type) {
     case 'analyze':
       return analyzeStored(fromWire(task.row), progress);
@@ -75,6 +79,8 @@ export function runGeometryTask(task: GeometryTask, progress: ProgressFn = () =>
       }
       return { ok: true, bytes: '' };
     }
+    case 'generators':
+      return generatorsPageFor(task.cacheKey, combinatorialFromResult(task.result as AnalysisResult), task.offset, task.limit);
     case 'wire-mesh':
       return { ok: true, bytes: wireMesh(fromWire(task.row)) };
   }

@@ -27,8 +27,6 @@ import type { AppDeps } from '../../deps.js';
 import { HttpError, parseOr400 } from '../../http/errors.js';
 import { analysisQueueFor, geometryWorkerFor } from '../../jobs/analysis-queue.js';
 import { storedFromWire, type BuildOutcome } from '../../jobs/geometry-tasks.js';
-import { combinatorialFromResult } from '../../jobs/compute-analysis.js';
-import { generatorsPageFor } from '../../jobs/floer-adapter.js';
 import {
   accessDiagram, analysisOf, appendRevision, createDiagram, doneResult, duplicateDiagram, getDiagram, listDiagrams,
   listRevisions, renameDiagram, restoreRevision, revisionId, revisionRow, softDelete, undelete,
@@ -185,6 +183,8 @@ export function diagramsRouter(deps: AppDeps): Router {
     const { diagram } = await accessDiagram(db, uid(req), req.params.diagramId, 'viewer');
     const a = await analysisOf(db, await revisionId(db, diagram.id, req.params.n));
     if (a.status === 'pending') queue.kick();
+    // A done analysis never changes: let the client revalidate by ETag (Express answers 304 itself).
+    if (a.status === 'done') res.set('Cache-Control', 'private, no-cache');
     res.json(a);
   });
 
@@ -192,8 +192,9 @@ export function diagramsRouter(deps: AppDeps): Router {
     const { diagram } = await accessDiagram(db, uid(req), req.params.diagramId, 'viewer');
     const q = parseOr400(generatorsQuerySchema, req.query);
     const rev = await revisionId(db, diagram.id, req.params.n);
-    const result = await doneResult(db, rev);
-    res.json(generatorsPageFor(rev.id, combinatorialFromResult(result), q.offset, q.limit));
+    const { stats, curves, basepoints, intersections, regions } = await doneResult(db, rev);
+    const light = { stats, curves: curves.map((c) => ({ ...c, vertices: [] })), basepoints, intersections, regions };
+    res.json(await geo.run({ type: 'generators', cacheKey: rev.id, result: light, offset: q.offset, limit: q.limit }));
   });
 
   r.get('/diagrams/:diagramId/revisions/:n/export', requireUser, async (req, res) => {
