@@ -234,6 +234,14 @@ export const fileProblemSchema = z.object({
   offset: z.number().int().optional(),
 });
 export type FileProblem = z.infer<typeof fileProblemSchema>;
+/**
+ * Error codes of the lab routes beyond the shared ERROR_STATUS, all answered with HTTP 422:
+ * invalid_file (upload rejected, details with line/offset), invalid_operation (template or edit refused by
+ * the geometry, details), computation_failed (the geometry worker crashed or timed out, e.g. a mesh too
+ * large for this server).
+ */
+export const LAB_ERROR_STATUS = { invalid_file: 422, invalid_operation: 422, computation_failed: 422 } as const;
+export type LabErrorCode = keyof typeof LAB_ERROR_STATUS;
 /** 422 body of a rejected upload. */
 export const INVALID_FILE_STATUS = 422;
 export const invalidFileErrorSchema = z.object({

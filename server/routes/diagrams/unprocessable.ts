@@ -2,7 +2,7 @@
  * 422 answers of the lab routes (invalid_file for uploads, invalid_operation for edits the geometry refuses).
  * The shared error middleware knows only ERROR_STATUS codes, so these routers answer 422 themselves through
  * `unprocessableHandler`, keeping the `{ error: { code, message, details } }` envelope. A geometry worker
- * crash or timeout answers 503 unavailable with the reason.
+ * crash or timeout answers 422 computation_failed with the reason (LAB_ERROR_STATUS in the contract).
  */
 import type { ErrorRequestHandler } from 'express';
 import type { Problem } from '../../../geometry/index.js';
@@ -26,7 +26,7 @@ export function problemDetails(problems: Problem[]): FileProblem[] {
 
 export const unprocessableHandler: ErrorRequestHandler = (err, _req, res, next) => {
   if (err instanceof GeometryTaskError) {
-    res.status(503).json({ error: { code: 'unavailable', message: err.message } });
+    res.status(422).json({ error: { code: 'computation_failed', message: err.message } });
     return;
   }
   if (!(err instanceof Unprocessable)) {
