@@ -104,6 +104,12 @@ export default function DiagramPage() {
   const restore = useRestore(diagramId);
   const reload = useReloadDiagram(diagramId);
 
+  // When an analysis finishes, the history and the library row show its new status.
+  const analysisStatus = analysis.data?.status;
+  useEffect(() => {
+    if (analysisStatus === 'done' || analysisStatus === 'failed') void reload();
+  }, [analysisStatus]);
+
   // A different revision: forget per-revision state.
   useEffect(() => {
     setDomain({}); setPeriodic(null); setWarnRegions(null); setGenerator(null); setSelected(null); setHover(null); setDraw(null);

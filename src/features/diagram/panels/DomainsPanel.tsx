@@ -44,7 +44,7 @@ function CheckReport({ check }: { check: DomainCheckResponse }) {
           {check.geometricEulerMeasure !== null && <span className="text-ink-muted"> (Gauss–Bonnet {check.geometricEulerMeasure.toFixed(4)})</span>}</dd>
         <dt className="text-ink-muted">n_x, n_y</dt><dd className="tabular-nums">{rationalText(check.nx)}, {rationalText(check.ny)}</dd>
         {check.nBasepoints.map((b) => (
-          <div key={b.name} className="contents"><dt className="text-ink-muted">n at {b.name}</dt><dd className="tabular-nums">{b.n}</dd></div>
+          <div key={b.name} className="contents"><dt className="text-ink-muted">n at {basepointNames([b.name])}</dt><dd className="tabular-nums">{b.n}</dd></div>
         ))}
         <dt className="text-ink-muted">μ</dt>
         <dd className="font-semibold tabular-nums" data-testid="maslov-index">{check.maslovIndex === null ? '—' : rationalText(check.maslovIndex)}</dd>
