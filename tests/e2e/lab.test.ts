@@ -109,6 +109,28 @@ describe('the lab in a browser', () => {
     await s.screenshot('lab-history-restored');
   });
 
+  it('shows a stale edit’s conflict clearly and reloads the latest revision', async () => {
+    const id = diagramIdOf(s.page);
+    // Someone else changes the diagram first (revision 3 → 4), behind this page's back.
+    const status = await s.page.evaluate(async (diagramId) => {
+      const r = await fetch(`/api/diagrams/${diagramId}/edits`, {
+        method: 'POST', credentials: 'same-origin', headers: { 'Content-Type': 'application/json' },
+        body: JSON.stringify({ baseRevision: 3, operation: { type: 'smooth', iterations: 1 } }),
+      });
+      return r.status;
+    }, id);
+    expect(status).toBe(201);
+    await s.page.getByRole('tab', { name: 'Draw & edit' }).click();
+    await s.page.getByRole('button', { name: 'Midpoint subdivision' }).click();
+    // common practice: optimistic concurrency answers 409 Conflict to a stale base revision
+    const alert = s.page.getByRole('alert').filter({ hasText: 'Someone changed this diagram first' });
+    await alert.waitFor();
+    await s.screenshot('lab-edit-conflict');
+    await alert.getByRole('button', { name: 'Reload the latest revision' }).click();
+    await s.page.getByText('Revision 4 (latest)').waitFor({ timeout: 30_000 });
+    expect(await alert.count()).toBe(0);
+  });
+
   it('builds a bigon domain on S¹×S² by clicking the surface and reads μ = 1', async () => {
     await openLibrary(s, libraryUrl);
     await createFromTemplate(s, async (page) => {

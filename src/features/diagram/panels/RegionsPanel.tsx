@@ -42,7 +42,7 @@ export function RegionsPanel({ regions, hover, selected, onHover, onSelect }: Re
               <th scope="col" className="px-1.5 py-1.5 text-right" title="Σ interior angle defects, radians">Interior</th>
               <th scope="col" className="px-1.5 py-1.5 text-right" title="Σ boundary turning, radians">Boundary</th>
               <th scope="col" className="px-1.5 py-1.5 text-right" title="Σ corner terms, radians">Corner terms</th>
-              <th scope="col" className="px-1.5 py-1.5 text-right">Difference</th>
+              <th scope="col" className="px-1.5 py-1.5 text-right" title="e GB − e corners; nonzero beyond rounding means a topology error">Δ</th>
             </tr>
           </thead>
           <tbody ref={body}>
