@@ -439,7 +439,8 @@ export const analysisResponseSchema = z.object({
   revision: z.number().int(),
   status: analysisStatusSchema,
   progress: z.number(),
-  error: z.object({ message: z.string() }).nullable(),
+  /** Why the analysis failed; problems lists every validation problem (e.g. a bare surface without curves). */
+  error: z.object({ message: z.string(), problems: z.array(z.string()).optional() }).nullable(),
   result: analysisResultSchema.nullable(),
 });
 export type AnalysisResponse = z.infer<typeof analysisResponseSchema>;

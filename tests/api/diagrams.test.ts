@@ -1,4 +1,5 @@
 import { sql } from 'drizzle-orm';
+import { buildTemplate, writeStl } from '../../geometry/index.js';
 import { beforeAll, describe, expect, it } from 'vitest';
 import {
   DIAGRAM_PATHS, diagramListResponseSchema, domainCheckResponseSchema, generatorsPageResponseSchema,
@@ -257,5 +258,19 @@ describe('analysis queue', () => {
     const a = await waitForAnalysis(team.viewer.agent, d.id, 1);
     expect(a.status).toBe('done');
     expect(a.result?.floer?.h1).toBe('Z/3');
+  });
+});
+
+describe('a bare surface', () => {
+  it('uploads as STL and fails its analysis with the reason in words (a genus-1 surface needs g = 1 pair of curves)', async () => {
+    const d = buildTemplate({ kind: 'lens', p: 3, q: 1 });
+    if (!d.ok) throw new Error('template');
+    const res = await team.editor.agent.post(DIAGRAM_PATHS.upload(team.workspace.id))
+      .field('name', 'Bare torus').attach('file', Buffer.from(writeStl(d.value.mesh)), 'torus.stl');
+    expect(res.status).toBe(201);
+    const a = await waitForAnalysis(team.editor.agent, res.body.diagram.id, 1);
+    expect(a.status).toBe('failed');
+    expect(a.error?.message).toContain('genus 1');
+    expect(a.error?.problems?.length).toBeGreaterThan(0);
   });
 });

@@ -275,12 +275,12 @@ export async function analysisOf(db: Db, rev: { id: string; number: number }): P
   const rows = await db.select().from(analyses).where(eq(analyses.revisionId, rev.id)).limit(1);
   const a = rows[0];
   if (!a) return { revision: rev.number, status: 'pending', progress: 0, error: null, result: null };
-  const err = a.error as { message?: string } | null;
+  const err = a.error as { message?: string; problems?: string[] } | null;
   return {
     revision: rev.number,
     status: a.status as AnalysisStatus,
     progress: a.progress,
-    error: err ? { message: err.message ?? 'The analysis failed.' } : null,
+    error: err ? { message: err.message ?? 'The analysis failed.', ...(err.problems?.length ? { problems: err.problems } : {}) } : null,
     result: a.status === 'done' ? (a.result as AnalysisResult) : null,
   };
 }
