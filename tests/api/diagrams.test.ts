@@ -159,6 +159,18 @@ describe('revisions', () => {
     expect(restored.result?.stats).toEqual(first.result?.stats);
   });
 
+  it('a Dehn twist of beta along alpha keeps the 3-manifold: H_1(L(3,1)) = Z/3, HF-hat rank 3 (twists along alpha extend over the alpha handlebody, Farb–Margalit 2012 ch. 3; Ozsváth–Szabó 2004)', async () => {
+    const d = await createFromTemplate(team.editor.agent, team.workspace.id, { kind: 'lens', p: 3, q: 1 });
+    const res = await team.editor.agent.post(DIAGRAM_PATHS.edits(d.id))
+      .send({ baseRevision: 1, operation: { type: 'twist', curve: { family: 'beta', index: 0 }, along: { family: 'alpha', index: 0 } } });
+    expect(res.status).toBe(201);
+    expect(res.body.revision.message).toContain('Dehn twist of beta_1 along alpha_1');
+    const a = await waitForAnalysis(team.viewer.agent, d.id, 2);
+    expect(a.result?.floer?.h1).toBe('Z/3');
+    expect(a.result?.intersections).toHaveLength(3);
+    expect(a.result?.floer?.homology?.rank).toBe(3);
+  });
+
   it('subdivision keeps the invariants: H_1(L(3,1)) = Z/3 and every region still a rectangle (Lipshitz 2006)', async () => {
     const d = await createFromTemplate(team.editor.agent, team.workspace.id, { kind: 'lens', p: 3, q: 1 });
     await team.editor.agent.post(DIAGRAM_PATHS.edits(d.id)).send({ baseRevision: 1, operation: { type: 'subdivide', method: 'midpoint' } }).expect(201);
