@@ -20,6 +20,16 @@ const SurfaceView = lazy(() => import('../../viewer/SurfaceView'));
 const SUB = '₀₁₂₃₄₅₆₇₈₉';
 const sub = (n: number) => String(n).split('').map((d) => SUB[Number(d)]).join('');
 
+/** Euler measures are multiples of 1/4 (Lipshitz 2006): 0.5 → 1/2, −0.25 → −1/4. */
+function quarters(x: number): string {
+  const q = Math.round(4 * x);
+  if (Math.abs(4 * x - q) > 1e-9) return x.toFixed(4);
+  const g = q % 4 === 0 ? 4 : q % 2 === 0 ? 2 : 1;
+  const num = q / g, den = 4 / g;
+  return `${num < 0 ? '−' : ''}${Math.abs(num)}${den === 1 ? '' : `/${den}`}`;
+}
+const bpName = (n: string) => n.replace(/_(\d+)$/, (_, d: string) => sub(Number(d)));
+
 async function fetchMesh(path: string, signal?: AbortSignal): Promise<MeshBinary> {
   const res = await fetch(path, { signal, credentials: 'same-origin' });
   if (!res.ok) throw new ApiError(res.status, `http_${res.status}`, `Could not load the surface (${res.status}).`);
@@ -102,8 +112,8 @@ export default function SharePage() {
                       <th scope="row" className="px-2 py-1 text-left font-medium">R{sub(r.id + 1)}</th>
                       <td className="px-2 py-1 text-right">{r.chi}</td>
                       <td className="px-2 py-1 text-right">{r.corners}</td>
-                      <td className="px-2 py-1 text-right tabular-nums">{r.eulerMeasure}</td>
-                      <td className="px-2 py-1">{r.basepoints.join(', ')}</td>
+                      <td className="px-2 py-1 text-right tabular-nums">{quarters(r.eulerMeasure)}</td>
+                      <td className="px-2 py-1">{r.basepoints.map(bpName).join(', ')}</td>
                     </tr>
                   ))}
                 </tbody>
