@@ -72,11 +72,14 @@ export class AnalysisQueue {
     while (this.loopPromise) await this.loopPromise;
   }
 
-  /** Stops claiming jobs, waits for the current one, ends the worker thread. */
+  /**
+   * Stops claiming jobs and ends the worker thread at once; a job cut short goes back to pending, so the
+   * next start computes it (shutdown never waits for a long analysis).
+   */
   async stop(): Promise<void> {
     this.stopped = true;
-    await this.whenIdle();
     await this.geo.close();
+    await this.whenIdle();
   }
 
   private async loop(): Promise<void> {
@@ -115,9 +118,13 @@ export class AnalysisQueue {
         .where(and(eq(analyses.revisionId, revisionId), eq(analyses.status, 'running')))
         .catch(() => undefined);
     };
-    const outcome: AnalysisOutcome = await this.geo.run({ type: 'analyze', row: rows[0] }, progress)
-      .catch((e: Error) => ({ ok: false as const, error: { message: e.message, problems: [] } }));
-    await this.finish(revisionId, outcome);
+    const outcome: AnalysisOutcome | null = await this.geo.run({ type: 'analyze', row: rows[0] }, progress)
+      .catch((e: Error) => (this.stopped ? null : { ok: false as const, error: { message: e.message, problems: [] } }));
+    if (outcome) await this.finish(revisionId, outcome);
+    else {
+      await this.db.update(analyses).set({ status: 'pending', progress: 0, startedAt: null })
+        .where(and(eq(analyses.revisionId, revisionId), eq(analyses.status, 'running')));
+    }
   }
 
   private async finish(revisionId: string, outcome: AnalysisOutcome): Promise<void> {

@@ -7,6 +7,7 @@ import {
   type AnalysisResult,
 } from '../../server/contract/diagrams.js';
 import { decodeInt32Base64, decodeMeshBinary } from '../../server/contract/mesh-binary.js';
+import { AnalysisQueue } from '../../server/jobs/analysis-queue.js';
 import { createTestApp, makeTeam, testDb } from './helpers.js';
 import { binaryParser, createFromTemplate, templateObj, waitForAnalysis } from './diagrams-helpers.js';
 
@@ -270,6 +271,18 @@ describe('analysis queue', () => {
     const a = await waitForAnalysis(team.viewer.agent, d.id, 1);
     expect(a.status).toBe('done');
     expect(a.result?.floer?.h1).toBe('Z/3');
+  });
+
+  it('leaves a job cut short by shutdown pending for the next start, never failed', async () => {
+    const d = await createFromTemplate(team.editor.agent, team.workspace.id, { kind: 'lens', p: 3, q: 1 });
+    await waitForAnalysis(team.editor.agent, d.id, 1);
+    const where = sql`revision_id = (SELECT id FROM diagram_revisions WHERE diagram_id = ${d.id} AND number = 1)`;
+    await testDb().execute(sql`UPDATE analyses SET status = 'pending', result = NULL, progress = 0 WHERE ${where}`);
+    const queue = new AnalysisQueue(testDb(), { log: () => undefined });
+    queue.kick();
+    await queue.stop();
+    const rows = await testDb().execute<{ status: string }>(sql`SELECT status FROM analyses WHERE ${where}`);
+    expect(rows.rows[0].status).toBe('pending');
   });
 });
 
