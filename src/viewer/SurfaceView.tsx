@@ -91,6 +91,16 @@ function CameraRig({ sphere, surfaceRef, positions, triangles, handle }: RigProp
       controls.update();
       invalidate();
     },
+    focusFace(face) {
+      if (!controls || 3 * face + 2 >= triangles.length) return;
+      const c = new THREE.Vector3(...faceCentroid(positions, triangles, face));
+      const n = new THREE.Vector3(...faceNormal(positions, triangles, face));
+      const dist = camera.position.distanceTo(controls.target);
+      controls.target.copy(c);
+      camera.position.copy(c).addScaledVector(n, dist);
+      controls.update();
+      invalidate();
+    },
     projectFace(face) {
       const mesh = surfaceRef.current;
       if (!mesh || 3 * face + 2 >= triangles.length) return null;
@@ -152,6 +162,7 @@ export default function SurfaceView(props: SurfaceViewProps) {
     resetView: () => handle.current?.resetView(),
     orbit: (a, b) => handle.current?.orbit(a, b),
     zoom: (f) => handle.current?.zoom(f),
+    focusFace: (f) => handle.current?.focusFace(f),
     projectFace: (f) => handle.current?.projectFace(f) ?? null,
   }), []);
 

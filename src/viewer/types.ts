@@ -48,6 +48,8 @@ export interface SurfaceViewHandle {
   orbit(dTheta: number, dPhi: number): void;
   /** Multiplies the camera distance by `factor` (< 1 zooms in). */
   zoom(factor: number): void;
+  /** Turns the camera to look at face f from outside (along its normal), keeping the distance. */
+  focusFace(face: number): void;
   /**
    * Client coordinates of face f's centroid when that face is what the pointer would hit there
    * (visible, unoccluded, inside the canvas); otherwise null.

@@ -170,6 +170,28 @@ export default function DiagramPage() {
     if (tab !== 'regions') setTab('regions');
   };
 
+  /** Selects a region or point from a table and turns the view towards it. */
+  const selectFromTable = (f: Focus) => {
+    setSelected(f);
+    const pos = mesh.data?.positions, tri = mesh.data?.triangles;
+    if (!pos || !tri || !index) return;
+    let face = -1;
+    if (f.kind === 'region') {
+      const faces = index.facesOf[f.id] ?? [];
+      const c = (g: number, k: number) => (pos[3 * tri[3 * g] + k] + pos[3 * tri[3 * g + 1] + k] + pos[3 * tri[3 * g + 2] + k]) / 3;
+      const mid = [0, 1, 2].map((k) => faces.reduce((s, g) => s + c(g, k), 0) / Math.max(1, faces.length));
+      let best = Infinity;
+      for (const g of faces) {
+        const d = [0, 1, 2].reduce((s, k) => s + (c(g, k) - mid[k]) ** 2, 0);
+        if (d < best) { best = d; face = g; }
+      }
+    } else {
+      const v = points.find((p) => p.id === f.id)?.vertex;
+      if (v !== undefined) for (let g = 0; g < tri.length / 3 && face < 0; g++) if (tri[3 * g] === v || tri[3 * g + 1] === v || tri[3 * g + 2] === v) face = g;
+    }
+    if (face >= 0) handle.current?.focusFace(face);
+  };
+
   // --- view data ---
   const curves = useMemo(() => (mesh.data ? viewerCurves(mesh.data) : []), [mesh.data]);
   const points = useMemo(() => (mesh.data ? viewerPoints(mesh.data, result, naming) : []), [mesh.data, result, naming]);
@@ -319,9 +341,9 @@ export default function DiagramPage() {
               running ? <div className="py-8"><ProgressBar value={analysis.data!.progress} label="Analysing" /><p className="mt-2 text-sm text-ink-muted">The tables fill in when the analysis is done.</p></div>
                 : analysis.isPending ? <LoadingState label="Loading the analysis…" /> : <p className="text-sm text-ink-muted">No analysis for this revision.</p>
             ) : tab === 'regions' ? (
-              <RegionsPanel regions={result.regions} hover={hover} selected={selected} onHover={setHover} onSelect={setSelected} />
+              <RegionsPanel regions={result.regions} hover={hover} selected={selected} onHover={setHover} onSelect={selectFromTable} />
             ) : tab === 'points' ? (
-              <PointsPanel intersections={result.intersections} hover={hover} selected={selected} onHover={setHover} onSelect={setSelected} />
+              <PointsPanel intersections={result.intersections} hover={hover} selected={selected} onHover={setHover} onSelect={selectFromTable} />
             ) : tab === 'generators' ? (
               <GeneratorsPanel diagramId={diagramId} revision={rev!} listed={Boolean(floer)} total={floer?.generatorCount ?? null} onShow={setGenerator} shown={generator} />
             ) : tab === 'domains' ? (
