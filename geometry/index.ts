@@ -82,7 +82,7 @@ export { domainLattice, domainBetween, classInvariant } from './floer/lattice.js
 export { nonNegativePeriodic } from './floer/admissibility-lp.js';
 export { nonNegativePeriodicFM } from './floer/admissibility.js';
 export type { H1Summary } from './floer/homology-h1.js';
-export { firstHomology, cokernel } from './floer/homology-h1.js';
+export { firstHomology, cokernel, formatH1 } from './floer/homology-h1.js';
 export type { NotNiceRegion } from './floer/nice-moves.js';
 export { isNice } from './floer/nice-moves.js';
 export type { SpincHomology, HfHatResult, HfHatOptions } from './floer/hf-hat.js';

@@ -52,3 +52,12 @@ export function firstHomology(comb: CombinatorialDiagram): H1Summary {
   const order = rank === 0 ? ck.torsion.reduce((x, y) => x * y, 1n).toString() : null;
   return { rank, torsion, order, determinant: determinant(rows).toString() };
 }
+
+/** H_1 as a user reads it: "0", "Z", "Z/5", "Z^2 ⊕ Z/3". O(#torsion). */
+export function formatH1(h: Pick<H1Summary, 'rank' | 'torsion'>): string {
+  const parts: string[] = [];
+  if (h.rank === 1) parts.push('Z');
+  else if (h.rank > 1) parts.push(`Z^${h.rank}`);
+  for (const t of h.torsion) parts.push(`Z/${t}`);
+  return parts.length ? parts.join(' ⊕ ') : '0';
+}

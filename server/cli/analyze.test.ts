@@ -53,6 +53,15 @@ describe('quadrant analyze (command line)', () => {
     expect(r.stdout).toContain('sum of Euler measures: 0');
   });
 
+  it('ends the text report with H_1 = Z/3 and HF-hat of rank 3 for L(3,1), one generator per spin^c class (Ozsváth–Szabó 2004)', () => {
+    const p = file('lens-3-1-text.obj', writeObj(lensSpaceDiagram(3, 1, 3)));
+    const r = runBin('analyze', p);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toContain('H_1(Y) = Z/3');
+    expect(r.stdout).toContain('HF-hat: rank 3');
+    expect(r.stdout.match(/spin\^c .*: 1 generator, rank 1/g)).toHaveLength(3);
+  });
+
   it('exits non-zero with the validation message and no stack trace on a tangency', () => {
     const p = file('tangent.obj', tangentDiagramObj());
     const r = runBin('analyze', p, '--json');

@@ -13,14 +13,13 @@ export const nodeIO: CliIO = {
 };
 
 function help(): string {
-  const width = Math.max(...COMMANDS.map((c) => c.name.length + c.usage.length + 1));
   return [
     'quadrant — Heegaard diagrams on triangulated surfaces',
     '',
     'Usage: quadrant COMMAND [ARGS]',
     '',
     'Commands:',
-    ...COMMANDS.map((c) => `  ${`${c.name} ${c.usage}`.padEnd(width)}  ${c.summary}`),
+    ...COMMANDS.flatMap((c) => [`  ${c.name} ${c.usage}`, `      ${c.summary}`]),
     '',
     'quadrant COMMAND --help shows one command.',
   ].join('\n');

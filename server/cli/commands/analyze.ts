@@ -3,7 +3,7 @@
  * validates it and prints intersection points, regions, Euler measures and curvature. Invalid input:
  * the problems on stderr, exit code 1.
  */
-import { parseDiagramFile, type Problem } from '../../../geometry/index.js';
+import { formatH1, parseDiagramFile, type FloerSummary, type Problem } from '../../../geometry/index.js';
 import { parseArgs, type CliCommand, type CliIO } from '../command.js';
 import { analysisReport, type AnalysisReport } from '../report.js';
 
@@ -40,8 +40,36 @@ export function reportText(file: string, r: AnalysisReport): string {
     '',
     `sum of Euler measures: ${quarters(r.eulerMeasureTotal)} (χ(Σ) = ${s.eulerCharacteristic})`,
   ];
+  lines.push('', ...floerText(r as unknown as Partial<FloerSummary>));
   if (r.defects.length) lines.push('', 'defects (please report):', ...r.defects.map((d) => `  ${d}`));
   return lines.join('\n');
+}
+
+const yesNo = (b: boolean | null | undefined): string => (b === null || b === undefined ? 'undecided' : b ? 'yes' : 'no');
+const regionList = (coefficients: readonly number[]): string =>
+  coefficients.map((c, i) => (c ? `${c}·R_${i + 1}` : '')).filter(Boolean).join(' + ');
+
+/** The Floer fields of the report (generators, H_1, admissibility, niceness, HF-hat) as text lines. */
+function floerText(f: Partial<FloerSummary>): string[] {
+  if (!f.h1) return [];
+  const lines = [
+    `generators: ${f.generators ?? 'too many to count'}`,
+    `H_1(Y) = ${formatH1(f.h1)}`,
+    `periodic domains: ${f.periodicDomains ?? 0}; weakly admissible: ${yesNo(f.weaklyAdmissible)}` +
+      (f.offendingPeriodicDomain ? ` (non-negative periodic domain ${regionList(f.offendingPeriodicDomain)})` : ''),
+    `nice: ${yesNo(f.nice)}` +
+      (f.notNiceRegions?.length ? ` (not bigons or squares: ${f.notNiceRegions.map((r) => `R_${r.region}`).join(', ')})` : ''),
+  ];
+  if (!f.hfHat) {
+    lines.push(`HF-hat: not computed — ${f.hfHatReason ?? 'unavailable'}`);
+    return lines;
+  }
+  lines.push(`HF-hat: rank ${f.hfHat.rank}` + (f.hfHat.rawRank !== f.hfHat.rank ? ` (the multi-pointed complex has rank ${f.hfHat.rawRank})` : ''));
+  for (const c of f.hfHat.bySpinc) {
+    const grades = c.byGrading.filter((g) => g.rawRank > 0).map((g) => `${g.rawRank} in grading ${g.grading}`).join(', ');
+    lines.push(`  spin^c ${c.label}: ${c.generators} generator${c.generators === 1 ? "" : "s"}, rank ${c.rank ?? c.rawRank}${grades ? ` (${grades})` : ''}`);
+  }
+  return lines;
 }
 
 async function run(args: string[], io: CliIO): Promise<number> {
