@@ -200,3 +200,19 @@ export const shareLinks = pgTable(
   (t) => [uniqueIndex('share_links_token_hash_unique').on(t.tokenHash)],
 );
 
+
+// --- lab (lab-server helper): per-revision analysis summary for library rows --------------------------
+/**
+ * The few analysis facts the library lists, written with the analysis result, so listing diagrams never
+ * reads the (large) result JSON. One row per revision whose analysis is done.
+ */
+export const analysisSummaries = pgTable('analysis_summaries', {
+  revisionId: uuid('revision_id')
+    .primaryKey()
+    .references(() => diagramRevisions.id, { onDelete: 'cascade' }),
+  intersectionCount: integer('intersection_count').notNull(),
+  generatorCount: text('generator_count'),
+  nice: boolean('nice'),
+  weaklyAdmissible: boolean('weakly_admissible'),
+  h1: text('h1'),
+});

@@ -7,7 +7,7 @@
  */
 import { and, eq, sql } from 'drizzle-orm';
 import type { Db } from '../db/client.js';
-import { analyses, diagramRevisions } from '../db/schema.js';
+import { analyses, analysisSummaries, diagramRevisions } from '../db/schema.js';
 import type { AppDeps } from '../deps.js';
 import type { AnalysisOutcome, ProgressFn } from './compute-analysis.js';
 import { GeometryWorker } from './geometry-pool.js';
@@ -130,7 +130,18 @@ export class AnalysisQueue {
   private async finish(revisionId: string, outcome: AnalysisOutcome): Promise<void> {
     const where = and(eq(analyses.revisionId, revisionId), eq(analyses.status, 'running'));
     if (outcome.ok) {
-      await this.db.update(analyses).set({ status: 'done', progress: 1, result: outcome.result, error: null, finishedAt: new Date() }).where(where);
+      const r = outcome.result;
+      await this.db.transaction(async (tx) => {
+        const done = await tx.update(analyses).set({ status: 'done', progress: 1, result: r, error: null, finishedAt: new Date() })
+          .where(where).returning({ id: analyses.revisionId });
+        if (!done.length) return;
+        const summary = {
+          intersectionCount: r.intersections.length, generatorCount: r.floer?.generatorCount ?? null, nice: r.floer?.nice ?? null,
+          weaklyAdmissible: r.floer?.weaklyAdmissible ?? null, h1: r.floer?.h1 ?? null,
+        };
+        await tx.insert(analysisSummaries).values({ revisionId, ...summary })
+          .onConflictDoUpdate({ target: analysisSummaries.revisionId, set: summary });
+      });
     } else {
       await this.db.update(analyses).set({ status: 'failed', progress: 1, result: null, error: outcome.error, finishedAt: new Date() }).where(where);
     }

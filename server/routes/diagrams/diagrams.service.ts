@@ -83,20 +83,17 @@ function toSummary(r: SummaryRow): DiagramSummary {
   };
 }
 
-/** Summary rows; the analysis fields are read inside PostgreSQL (the big result never leaves it). */
+/** Summary rows; analysis facts come from analysis_summaries (the large result JSON is never read here). */
 async function summaries(db: Db, where: ReturnType<typeof sql>): Promise<DiagramSummary[]> {
   const res = await db.execute<SummaryRow>(sql`
     SELECT d.id, d.workspace_id, d.name, d.description, d.head_revision, d.created_at, d.updated_at, d.deleted_at,
       cu.id AS created_by_id, cu.name AS created_by_name, uu.id AS updated_by_id, uu.name AS updated_by_name,
       r.stats, a.status AS analysis_status,
-      jsonb_array_length(a.result->'intersections') AS intersection_count,
-      a.result->'floer'->>'generatorCount' AS generator_count,
-      (a.result->'floer'->>'nice')::boolean AS nice,
-      (a.result->'floer'->>'weaklyAdmissible')::boolean AS weakly_admissible,
-      a.result->'floer'->>'h1' AS h1
+      s.intersection_count, s.generator_count, s.nice, s.weakly_admissible, s.h1
     FROM diagrams d
     LEFT JOIN diagram_revisions r ON r.diagram_id = d.id AND r.number = d.head_revision
     LEFT JOIN analyses a ON a.revision_id = r.id
+    LEFT JOIN analysis_summaries s ON s.revision_id = r.id AND a.status = 'done'
     LEFT JOIN users cu ON cu.id = d.created_by
     LEFT JOIN users uu ON uu.id = d.updated_by
     WHERE ${where}
@@ -187,6 +184,11 @@ async function copyRevision(tx: Tx, fromDiagram: string, fromNumber: number, toD
   await tx.execute(sql`
     INSERT INTO analyses (revision_id, status, progress, result, error, started_at, finished_at)
     SELECT ${row.id}, 'done', 1, result, NULL, started_at, finished_at FROM analyses WHERE revision_id = ${row.source} AND status = 'done'`);
+  await tx.execute(sql`
+    INSERT INTO analysis_summaries (revision_id, intersection_count, generator_count, nice, weakly_admissible, h1)
+    SELECT ${row.id}, s.intersection_count, s.generator_count, s.nice, s.weakly_admissible, s.h1
+    FROM analysis_summaries s JOIN analyses a ON a.revision_id = s.revision_id AND a.status = 'done'
+    WHERE s.revision_id = ${row.source}`);
   await tx.insert(analyses).values({ revisionId: row.id, status: 'pending', progress: 0 }).onConflictDoNothing();
   return row.id;
 }
