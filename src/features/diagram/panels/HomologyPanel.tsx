@@ -40,7 +40,7 @@ export function HomologyPanel({ floer, unavailable, onShowPeriodic, onShowRegion
         <dd className="flex flex-wrap items-center gap-2">
           <YesNo ok={floer.weaklyAdmissible} yes="Yes" no="No" />
           {floer.admissibilityWitness && (
-            <Button size="sm" variant="secondary" aria-pressed={showing === 'witness'}
+            <Button size="sm" variant="secondary" aria-pressed={showing === 'witness'} className={showing === 'witness' ? '!bg-accent-soft !border-accent' : ''}
               onClick={() => {
                 if (showing === 'witness') { onShowPeriodic(null); onShowRegions(null); return; }
                 onShowPeriodic({ coefficients: floer.admissibilityWitness!.coefficients, label: 'witness' });
@@ -56,7 +56,7 @@ export function HomologyPanel({ floer, unavailable, onShowPeriodic, onShowRegion
           {floer.notNiceRegions.length > 0 && (
             <>
               <span className="text-ink-muted">({floer.notNiceRegions.map((r) => `${regionLabel(r.region)}: ${r.corners} corners, χ = ${r.chi}`).join('; ')})</span>
-              <Button size="sm" variant="secondary" aria-pressed={showing === 'not-nice'}
+              <Button size="sm" variant="secondary" aria-pressed={showing === 'not-nice'} className={showing === 'not-nice' ? '!bg-accent-soft !border-accent' : ''}
                 onClick={() => { if (showing === 'not-nice') { onShowRegions(null); onShowPeriodic(null); } else { onShowPeriodic(null); onShowRegions(floer.notNiceRegions.map((r) => r.region)); } }}>
                 {showing === 'not-nice' ? 'Hide' : 'Show on the surface'}
               </Button>
@@ -73,7 +73,7 @@ export function HomologyPanel({ floer, unavailable, onShowPeriodic, onShowRegion
           <ul className="flex flex-wrap gap-2">
             {floer.periodicDomains.map((p, i) => (
               <li key={i}>
-                <Button size="sm" variant="secondary" aria-pressed={showing === `P${i}`}
+                <Button size="sm" variant="secondary" aria-pressed={showing === `P${i}`} className={showing === `P${i}` ? '!bg-accent-soft !border-accent' : ''}
                   onClick={() => { onShowRegions(null); onShowPeriodic(showing === `P${i}` ? null : { coefficients: p.coefficients, label: `P${i}` }); }}>
                   P{i + 1}
                 </Button>
