@@ -468,7 +468,7 @@ export const generatorSchema = z.object({
   grading: z.number().int().nullable(),
 });
 export type Generator = z.infer<typeof generatorSchema>;
-/** GET generators; 409 conflict while the analysis is not done; 422 when enumeration was refused. */
+/** GET generators; 409 conflict while the analysis is not done (or when it failed). Classes and gradings are null past the classification limit. */
 export const generatorsPageResponseSchema = z.object({
   total: z.string(),
   offset: z.number().int(),
