@@ -41,7 +41,7 @@ function CameraRig({ sphere, surfaceRef, positions, triangles, handle }: RigProp
   const fitDistance = useCallback(() => {
     const vHalf = (((camera as THREE.PerspectiveCamera).fov ?? 40) * Math.PI) / 360;
     const hHalf = Math.atan(Math.tan(vHalf) * (size.width / Math.max(1, size.height)));
-    return (sphere.radius / Math.sin(Math.min(vHalf, hHalf))) * 1.02;
+    return (sphere.radius / Math.sin(Math.min(vHalf, hHalf))) * 1.08;
   }, [camera, sphere.radius, size.width, size.height]);
 
   const place = useCallback((dir: THREE.Vector3) => {
