@@ -84,7 +84,7 @@ describe('quadrant analyze (command line)', () => {
 
   it('dispatches through the registry in-process: --help lists analyze, unknown commands exit 2', async () => {
     const out: string[] = [], err: string[] = [];
-    const io = { out: (t: string) => out.push(t), err: (t: string) => err.push(t), readFile: () => new Uint8Array() };
+    const io = { out: (t: string) => out.push(t), err: (t: string) => err.push(t), readFile: () => new Uint8Array(), writeFile: () => {} };
     expect(await main(['--help'], io)).toBe(0);
     expect(out.join('')).toContain('analyze FILE [--json]');
     expect(await main(['frobnicate'], io)).toBe(2);

@@ -2,7 +2,7 @@
  * Entry of the `quadrant` command-line tool (bin/quadrant.mjs loads it through tsx). Dispatches to the
  * commands of registry.ts; never prints a stack trace for user errors.
  */
-import { readFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import type { CliIO } from './command.js';
 import { COMMANDS } from './registry.js';
 
@@ -10,6 +10,7 @@ export const nodeIO: CliIO = {
   out: (t) => { process.stdout.write(t.endsWith('\n') ? t : `${t}\n`); },
   err: (t) => { process.stderr.write(t.endsWith('\n') ? t : `${t}\n`); },
   readFile: (p) => readFileSync(p),
+  writeFile: (p, t) => writeFileSync(p, t),
 };
 
 function help(): string {

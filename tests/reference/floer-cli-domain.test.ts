@@ -25,7 +25,7 @@ function fixture(): { obj: string; inRegion: number[]; crossings: number[]; bigo
 
 async function run(args: string[], obj: string) {
   const out: string[] = [], err: string[] = [];
-  const io = { out: (t: string) => out.push(t), err: (t: string) => err.push(t), readFile: () => new TextEncoder().encode(obj) };
+  const io = { out: (t: string) => out.push(t), err: (t: string) => err.push(t), readFile: () => new TextEncoder().encode(obj), writeFile: () => {} };
   const code = await main(['domain', 'diagram.obj', ...args], io);
   return { code, out: out.join(''), err: err.join('') };
 }

@@ -3,8 +3,8 @@
  * validates it and prints intersection points, regions, Euler measures and curvature. Invalid input:
  * the problems on stderr, exit code 1.
  */
-import { formatH1, parseDiagramFile, type FloerSummary, type Problem } from '../../../geometry/index.js';
-import { parseArgs, type CliCommand, type CliIO } from '../command.js';
+import { formatH1, type FloerSummary } from '../../../geometry/index.js';
+import { parseOptions, problemLines, readDiagramFile, type CliCommand, type CliIO } from '../command.js';
 import { analysisReport, type AnalysisReport } from '../report.js';
 
 const fmt = (x: number, digits = 6): string =>
@@ -14,11 +14,6 @@ const quarters = (x: number): string => {
   if (q % 4 === 0) return String(q / 4);
   return q % 2 === 0 ? `${q / 2}/2` : `${q}/4`;
 };
-
-/** One line per problem, with the file line when known. */
-export function problemLines(file: string, problems: Problem[]): string {
-  return problems.map((p) => `  ${file}${p.line !== undefined ? `:${p.line}` : ''}: ${p.message}`).join('\n');
-}
 
 /** The readable text form of a report. */
 export function reportText(file: string, r: AnalysisReport): string {
@@ -73,32 +68,20 @@ function floerText(f: Partial<FloerSummary>): string[] {
 }
 
 async function run(args: string[], io: CliIO): Promise<number> {
-  const { flags, positional } = parseArgs(args);
+  const { flags, positional } = parseOptions(args);
   const unknown = [...flags.keys()].filter((f) => f !== 'json');
   if (positional.length !== 1 || unknown.length) {
     io.err(`Usage: quadrant analyze FILE [--json]${unknown.length ? `\nunknown option --${unknown[0]}` : ''}`);
     return 2;
   }
   const file = positional[0];
-  let bytes: Uint8Array;
-  try {
-    bytes = io.readFile(file);
-  } catch (e) {
-    const code = (e as { code?: string }).code;
-    io.err(`quadrant analyze: cannot read ${file}${code === 'ENOENT' ? ': no such file' : code ? ` (${code})` : ''}`);
-    return 1;
-  }
-  const parsed = parseDiagramFile(file, bytes);
-  if (!parsed.ok) {
-    io.err(`quadrant analyze: ${file} is not a valid Heegaard diagram:\n${problemLines(file, parsed.errors)}`);
-    return 1;
-  }
-  const report = analysisReport(parsed.value.diagram);
+  const parsed = readDiagramFile(io, 'analyze', file);
+  if (!parsed) return 1;
+  const report = analysisReport(parsed.diagram);
   if (!report.ok) {
     io.err(`quadrant analyze: ${file} is not a valid Heegaard diagram:\n${problemLines(file, report.errors)}`);
     return 1;
   }
-  if (parsed.value.warnings.length) io.err(`warnings:\n${problemLines(file, parsed.value.warnings)}`);
   io.out(flags.has('json') ? JSON.stringify(report.value) : reportText(file, report.value));
   return 0;
 }

@@ -5,11 +5,10 @@
  * (Lipshitz 2006). Vertex numbers are as in the file. Input errors: message on stderr, exit 1 (2 for usage).
  */
 import {
-  analyzeDiagram, checkDomain, curveName, parseDiagramFile, toCombinatorial, vertexLabel,
+  analyzeDiagram, checkDomain, curveName, toCombinatorial, vertexLabel,
   type DiagramAnalysis, type DomainCheck, type HeegaardDiagram,
 } from '../../../geometry/index.js';
-import type { CliCommand, CliIO } from '../command.js';
-import { problemLines } from './analyze.js';
+import { problemLines, readDiagramFile, type CliCommand, type CliIO } from '../command.js';
 
 const USAGE = 'FILE --coef V=N [--coef V=N ...] [--from V,V,..] [--to V,V,..] [--json]';
 
@@ -117,15 +116,8 @@ function text(file: string, p: ReturnType<typeof present>): string {
 function run(args: string[], io: CliIO): number {
   const parsed = parseDomainArgs(args);
   if (typeof parsed === 'string') { io.err(`Usage: quadrant domain ${USAGE}\n${parsed}`); return 2; }
-  let bytes: Uint8Array;
-  try { bytes = io.readFile(parsed.file); } catch (e) {
-    const code = (e as { code?: string }).code;
-    io.err(`quadrant domain: cannot read ${parsed.file}${code === 'ENOENT' ? ': no such file' : code ? ` (${code})` : ''}`);
-    return 1;
-  }
-  const file = parseDiagramFile(parsed.file, bytes);
-  if (!file.ok) { io.err(`quadrant domain: ${parsed.file} is not a valid Heegaard diagram:\n${problemLines(parsed.file, file.errors)}`); return 1; }
-  const d = file.value.diagram;
+  const d = readDiagramFile(io, 'domain', parsed.file)?.diagram;
+  if (!d) return 1;
   const a = analyzeDiagram(d);
   if (!a.ok) { io.err(`quadrant domain: ${parsed.file} is not a valid Heegaard diagram:\n${problemLines(parsed.file, a.errors)}`); return 1; }
   const coeffs = coefficients(d, a.value, parsed.coefs);

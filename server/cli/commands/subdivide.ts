@@ -3,8 +3,7 @@
  * or Loop 1987 with Warren's weights), carrying the curves along.
  */
 import { subdivideDiagram } from '../../../geometry/index.js';
-import type { CliCommand, CliIO } from '../command.js';
-import { parseOptions, problemText, readDiagram, writeDiagram } from './template.js';
+import { parseOptions, problemLines, readDiagramFile, writeDiagram, type CliCommand, type CliIO } from '../command.js';
 
 const USAGE = 'FILE [--loop] --out FILE.obj';
 
@@ -16,10 +15,10 @@ async function run(args: string[], io: CliIO): Promise<number> {
     io.err(`${unknown.length ? `quadrant subdivide: unknown option --${unknown[0]}\n` : ''}Usage: quadrant subdivide ${USAGE}`);
     return 2;
   }
-  const d = readDiagram(io, 'subdivide', positional[0]);
+  const d = readDiagramFile(io, 'subdivide', positional[0])?.diagram;
   if (!d) return 1;
   const r = subdivideDiagram(d, flags.has('loop') ? 'loop' : 'midpoint');
-  if (!r.ok) { io.err(`quadrant subdivide: cannot subdivide:\n${problemText(r.errors)}`); return 1; }
+  if (!r.ok) { io.err(`quadrant subdivide: cannot subdivide:\n${problemLines(positional[0], r.errors)}`); return 1; }
   const why = writeDiagram(io, out, r.value, `Quadrant: ${flags.has('loop') ? 'Loop' : 'midpoint'} subdivision of ${positional[0]}`);
   if (why) { io.err(`quadrant subdivide: ${why}`); return 1; }
   io.out(`wrote ${out}: ${r.value.mesh.nV} vertices, ${r.value.mesh.nF} triangles`);

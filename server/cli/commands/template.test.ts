@@ -7,7 +7,7 @@ import { analyzeDiagram, buildTemplate, parseDiagramFile, type HeegaardDiagram }
 function memoryIO() {
   const files = new Map<string, string | Uint8Array>();
   const out: string[] = [], err: string[] = [];
-  const io: CliIO & { writeFile(p: string, t: string): void } = {
+  const io: CliIO = {
     out: (t) => { out.push(t); }, err: (t) => { err.push(t); },
     readFile: (p) => {
       const f = files.get(p);

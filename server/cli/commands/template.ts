@@ -1,66 +1,11 @@
 /**
  * `quadrant template KIND ... --out FILE.obj`: builds a built-in diagram (lens space, S^3, #^g S^1 x S^2,
- * grid diagram, torus curve) and writes it as OBJ. Also holds the small file helpers shared by the
- * `twist` and `subdivide` commands. Exit codes: 0 success, 1 invalid input, 2 usage error.
+ * grid diagram, torus curve) and writes it as OBJ. Exit codes: 0 success, 1 invalid input, 2 usage error.
  */
-import { writeFileSync } from 'node:fs';
-import { buildTemplate, parseDiagramFile, writeObj, type HeegaardDiagram, type Problem, type TemplateSpec } from '../../../geometry/index.js';
-import type { CliCommand, CliIO } from '../command.js';
+import { buildTemplate, type TemplateSpec } from '../../../geometry/index.js';
+import { parseOptions, problemLines, writeDiagram, type CliCommand, type CliIO } from '../command.js';
 
 const USAGE = 'lens --p P --q Q | s3 --genus G | s1xs2 --genus G | grid --x PERM --o PERM | torus-curve --p P --q Q  [--resolution N] --out FILE.obj';
-
-/** Problems as indented lines. */
-export const problemText = (problems: Problem[]): string => problems.map((p) => `  ${p.message}`).join('\n');
-
-/** Writes a diagram as OBJ to `out` (must end in .obj); returns an error message or null. */
-export function writeDiagram(io: CliIO, out: string, d: HeegaardDiagram, comment: string): string | null {
-  if (!/\.obj$/i.test(out)) return `the output file must end in .obj (got ${out})`;
-  const text = writeObj(d, comment);
-  const w = (io as CliIO & { writeFile?: (p: string, t: string) => void }).writeFile;
-  try {
-    if (w) w(out, text); else writeFileSync(out, text);
-  } catch (e) {
-    return `cannot write ${out}${(e as { code?: string }).code ? ` (${(e as { code?: string }).code})` : ''}`;
-  }
-  return null;
-}
-
-/** Reads and validates a diagram file; prints problems and returns null on failure. */
-export function readDiagram(io: CliIO, cmd: string, file: string): HeegaardDiagram | null {
-  let bytes: Uint8Array;
-  try {
-    bytes = io.readFile(file);
-  } catch (e) {
-    const code = (e as { code?: string }).code;
-    io.err(`quadrant ${cmd}: cannot read ${file}${code === 'ENOENT' ? ': no such file' : code ? ` (${code})` : ''}`);
-    return null;
-  }
-  const parsed = parseDiagramFile(file, bytes);
-  if (!parsed.ok) {
-    io.err(`quadrant ${cmd}: ${file} is not a valid Heegaard diagram:\n${problemText(parsed.errors)}`);
-    return null;
-  }
-  return parsed.value.diagram;
-}
-
-/**
- * Splits arguments into flags and positionals; flags named in `valued` take a value either as
- * --name=value or as the next argument (--name value).
- */
-export function parseOptions(args: string[], valued: string[]): { flags: Map<string, string | true>; positional: string[] } {
-  const flags = new Map<string, string | true>();
-  const positional: string[] = [];
-  for (let i = 0; i < args.length; i++) {
-    const a = args[i];
-    if (!a.startsWith('--')) { positional.push(a); continue; }
-    const eq = a.indexOf('=');
-    if (eq > 0) { flags.set(a.slice(2, eq), a.slice(eq + 1)); continue; }
-    const name = a.slice(2);
-    if (valued.includes(name) && i + 1 < args.length && !args[i + 1].startsWith('--')) flags.set(name, args[++i]);
-    else flags.set(name, true);
-  }
-  return { flags, positional };
-}
 
 const intFlag = (flags: Map<string, string | true>, name: string): number | string | undefined => {
   const v = flags.get(name);
@@ -108,7 +53,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
   }
   const built = buildTemplate(parsed.spec);
   if (!built.ok) {
-    io.err(`quadrant template: cannot build this diagram:\n${problemText(built.errors)}`);
+    io.err(`quadrant template: cannot build this diagram:\n${problemLines('template', built.errors)}`);
     return 1;
   }
   const why = writeDiagram(io, parsed.out, built.value, `Quadrant template ${JSON.stringify(parsed.spec)}`);

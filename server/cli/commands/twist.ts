@@ -3,8 +3,7 @@
  * along another (Farb–Margalit 2012, ch. 3); curves are named as users see them (alpha_1, beta_2).
  */
 import { curveIndexByName, dehnTwist } from '../../../geometry/index.js';
-import type { CliCommand, CliIO } from '../command.js';
-import { parseOptions, problemText, readDiagram, writeDiagram } from './template.js';
+import { parseOptions, problemLines, readDiagramFile, writeDiagram, type CliCommand, type CliIO } from '../command.js';
 
 const USAGE = 'FILE --curve NAME --along NAME [--negative] --out FILE.obj';
 
@@ -16,7 +15,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
     io.err(`${unknown.length ? `quadrant twist: unknown option --${unknown[0]}\n` : ''}Usage: quadrant twist ${USAGE}`);
     return 2;
   }
-  const d = readDiagram(io, 'twist', positional[0]);
+  const d = readDiagramFile(io, 'twist', positional[0])?.diagram;
   if (!d) return 1;
   const c = curveIndexByName(d, curve), a = curveIndexByName(d, along);
   for (const [name, i] of [[curve, c], [along, a]] as const) {
@@ -26,7 +25,7 @@ async function run(args: string[], io: CliIO): Promise<number> {
     }
   }
   const r = dehnTwist(d, c, a, { negative: flags.has('negative') });
-  if (!r.ok) { io.err(`quadrant twist: cannot twist:\n${problemText(r.errors)}`); return 1; }
+  if (!r.ok) { io.err(`quadrant twist: cannot twist:\n${problemLines(positional[0], r.errors)}`); return 1; }
   const why = writeDiagram(io, out, r.value, `Quadrant: ${curve} twisted ${flags.has('negative') ? 'negatively' : 'positively'} along ${along}`);
   if (why) { io.err(`quadrant twist: ${why}`); return 1; }
   io.out(`wrote ${out}: ${r.value.mesh.nV} vertices, ${r.value.mesh.nF} triangles`);
