@@ -181,6 +181,21 @@ describe('the lab in a browser', () => {
     await s.screenshot('lab-upload-broken-obj');
   });
 
+  it('explains a missing WebGL context in place of the view and keeps the tables working, read-only for a viewer', async () => {
+    // Without the software rasterizer Chromium has no WebGL at all (STACK.md).
+    const v = await openSignedIn('viewer', undefined, { extraArgs: ['--disable-software-rasterizer'] });
+    try {
+      await v.page.getByRole('link', { name: new RegExp(DEMO_WORKSPACE_NAME) }).click();
+      await v.page.getByTestId('diagram-row').first().getByRole('link').click();
+      await v.page.getByText('The 3D view needs WebGL').waitFor();
+      await (await regionRows(v.page)).first().waitFor();
+      expect(await v.page.getByRole('tab', { name: 'Draw & edit' }).count()).toBe(0);
+      await v.screenshot('lab-no-webgl-viewer');
+    } finally {
+      await v.close();
+    }
+  });
+
   it('sorts the library by a header button (aria-sort) and filters it', async () => {
     await openLibrary(s, libraryUrl);
     const header = s.page.getByRole('columnheader', { name: /Name/ });
