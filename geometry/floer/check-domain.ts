@@ -6,7 +6,7 @@
  */
 import type { CombinatorialDiagram } from './combinatorics.js';
 import {
-  basepointMultiplicities, byAlpha, cornerMap, eulerQuarters, generatorProblem, maslovQuarters, pointName,
+  basepointMultiplicities, byAlpha, cornerMap, eulerQuarters, generatorProblem, maslovQuarters, pointName, sharedCurveProblem,
   pointQuarters, quartersText,
 } from './domains.js';
 
@@ -81,16 +81,7 @@ function cornerProblem(comb: CombinatorialDiagram, J: Int32Array, plus: number[]
   for (let i = 0; i < J.length; i++) {
     if (Math.abs(J[i]) > 1) return `the boundary turns ${J[i]} times at ${pointName(comb, i)}; a domain from x to y has corner count -1, 0 or 1 there`;
   }
-  for (const [set, name] of [[plus, 'x'], [minus, 'y']] as const) {
-    const seenA = new Set<number>(), seenB = new Set<number>();
-    for (const i of set) {
-      const p = comb.points[i];
-      if (seenA.has(p.alpha)) return `${name} would use two points on alpha_${p.alpha + 1}`;
-      if (seenB.has(p.beta)) return `${name} would use two points on beta_${p.beta + 1}`;
-      seenA.add(p.alpha); seenB.add(p.beta);
-    }
-  }
-  return null;
+  return sharedCurveProblem(comb, plus, 'x') ?? sharedCurveProblem(comb, minus, 'y');
 }
 
 /** Finds x and y from the corners and the given ends; returns [x, y] or a reason. */

@@ -62,6 +62,11 @@ export function generatorProblem(comb: CombinatorialDiagram, pts: readonly numbe
   const k = comb.curveCount;
   if (pts.some((i) => !Number.isInteger(i) || i < 0 || i >= comb.points.length)) return `${name} names something that is not an intersection point`;
   if (pts.length !== k) return `${name} has ${pts.length} points but a generator has one point on each of the ${k} alpha curves`;
+  return sharedCurveProblem(comb, pts, name);
+}
+
+/** Names the first alpha or beta curve that holds two of the points, or null. O(#points). */
+export function sharedCurveProblem(comb: CombinatorialDiagram, pts: readonly number[], name: string): string | null {
   const a = new Set<number>(), b = new Set<number>();
   for (const i of pts) {
     const p = comb.points[i];

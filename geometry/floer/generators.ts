@@ -76,40 +76,42 @@ export function countGenerators(comb: CombinatorialDiagram): bigint | null {
  * mask. O(#generators * k) plus dead ends.
  */
 export function forEachGenerator(comb: CombinatorialDiagram, visit: (x: Int32Array) => boolean | void): void {
-  const { k, pointsOnAlpha } = curveIncidence(comb);
-  const betaOf = Int32Array.from(comb.points, (p) => p.beta);
-  const x = new Int32Array(k);
-  const cursor = new Int32Array(k).fill(-1);
-  const used = new Uint8Array(k);
-  if (k === 0) { visit(x); return; }
-  let i = 0;
-  while (i >= 0) {
-    if (cursor[i] >= 0) used[betaOf[x[i]]] = 0;
-    const list = pointsOnAlpha[i];
-    let c = cursor[i] + 1;
-    while (c < list.length && used[betaOf[list[c]]]) c++;
-    if (c >= list.length) { cursor[i] = -1; i--; continue; }
-    cursor[i] = c; x[i] = list[c]; used[betaOf[list[c]]] = 1;
-    if (i === k - 1) { if (visit(x) === false) return; } else i++;
-  }
+  const walk = generatorWalk(comb);
+  while (walk.advance()) if (visit(walk.x) === false) return;
 }
 
 /** Lazily yields generators (fresh arrays) in the order of forEachGenerator; same DFS, O(k) per step. */
 export function* generators(comb: CombinatorialDiagram): Generator<Int32Array> {
+  const walk = generatorWalk(comb);
+  while (walk.advance()) yield walk.x.slice();
+}
+
+/**
+ * The depth-first walk behind both enumerations: `advance()` moves `x` to the next generator and returns
+ * false when there is none. Depth-first over alphas with a used-beta mask; O(k) per step plus dead ends.
+ */
+function generatorWalk(comb: CombinatorialDiagram): { x: Int32Array; advance(): boolean } {
   const { k, pointsOnAlpha } = curveIncidence(comb);
   const betaOf = Int32Array.from(comb.points, (p) => p.beta);
   const x = new Int32Array(k), cursor = new Int32Array(k).fill(-1), used = new Uint8Array(k);
-  if (k === 0) { yield x; return; }
-  let i = 0;
-  while (i >= 0) {
-    if (cursor[i] >= 0) used[betaOf[x[i]]] = 0;
-    const list = pointsOnAlpha[i];
-    let c = cursor[i] + 1;
-    while (c < list.length && used[betaOf[list[c]]]) c++;
-    if (c >= list.length) { cursor[i] = -1; i--; continue; }
-    cursor[i] = c; x[i] = list[c]; used[betaOf[list[c]]] = 1;
-    if (i === k - 1) yield x.slice(); else i++;
-  }
+  let i = 0, done = false;
+  const advance = (): boolean => {
+    if (done) return false;
+    if (k === 0) { done = true; return true; }
+    while (i >= 0) {
+      if (cursor[i] >= 0) used[betaOf[x[i]]] = 0;
+      const list = pointsOnAlpha[i];
+      let c = cursor[i] + 1;
+      while (c < list.length && used[betaOf[list[c]]]) c++;
+      if (c >= list.length) { cursor[i] = -1; i--; continue; }
+      cursor[i] = c; x[i] = list[c]; used[betaOf[list[c]]] = 1;
+      if (i === k - 1) return true;
+      i++;
+    }
+    done = true;
+    return false;
+  };
+  return { x, advance };
 }
 
 /** Sign of a generator: sign(σ) · Π local intersection signs (REFERENCE.md, H_1 and Euler characteristic). O(k^2) */
