@@ -2,10 +2,13 @@
  * The analysis queue: a small in-process queue persisted in the `analyses` table (one row per revision,
  * status pending → running → done | failed). Jobs are claimed with `FOR UPDATE SKIP LOCKED`, so several
  * server processes may share one database. Computation runs in a worker thread (geometry-pool.ts) so big
- * meshes never block the HTTP event loop; progress goes to analyses.progress. At start, rows left
- * `running` by a stopped process go back to `pending` and everything pending is picked up again.
+ * meshes never block the HTTP event loop; progress goes to analyses.progress. While a job runs, its process
+ * holds a session-level advisory lock on the revision (taken in the claiming statement itself); at start,
+ * rows left `running` whose lock nobody holds (their process stopped) go back to `pending`, and everything
+ * pending is picked up again.
  */
-import { and, eq, sql } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
+import type pg from 'pg';
 import type { Db } from '../db/client.js';
 import { analyses, analysisSummaries, diagramRevisions } from '../db/schema.js';
 import type { AppDeps } from '../deps.js';
@@ -19,6 +22,9 @@ export interface AnalysisQueueOptions {
   jobTimeoutMs?: number;
   log?: (msg: string) => void;
 }
+
+/** Advisory lock namespace of running analyses (key 2 is hashtext(revision id)). */
+const LOCK_NS = 7453022;
 
 /** Inserts the pending analysis row of a revision (idempotent). Call inside the revision's transaction. */
 export async function insertPendingAnalysis(db: Pick<Db, 'insert'>, revisionId: string): Promise<void> {
@@ -39,7 +45,18 @@ export class AnalysisQueue {
 
   /** Requeues analyses left running by a stopped process, then works through everything pending. */
   async start(): Promise<void> {
-    await this.db.update(analyses).set({ status: 'pending', progress: 0, startedAt: null }).where(eq(analyses.status, 'running'));
+    const client = await this.db.$client.connect();
+    try {
+      const running = await client.query<{ revision_id: string }>(`SELECT revision_id FROM analyses WHERE status = 'running'`);
+      for (const { revision_id: id } of running.rows) {
+        const free = await client.query<{ ok: boolean }>('SELECT pg_try_advisory_lock($1, hashtext($2)) AS ok', [LOCK_NS, id]);
+        if (!free.rows[0]?.ok) continue; // a live process is computing it
+        await client.query(`UPDATE analyses SET status = 'pending', progress = 0, started_at = NULL WHERE revision_id = $1 AND status = 'running'`, [id]);
+        await client.query('SELECT pg_advisory_unlock($1, hashtext($2))', [LOCK_NS, id]);
+      }
+    } finally {
+      client.release();
+    }
     this.kick();
   }
 
@@ -86,20 +103,32 @@ export class AnalysisQueue {
     for (;;) {
       this.again = false;
       if (this.stopped) return;
-      const id = await this.claim();
-      if (!id) return;
-      await this.runJob(id);
+      const client = await this.db.$client.connect();
+      try {
+        const id = await this.claim(client);
+        if (!id) return;
+        try {
+          await this.runJob(id);
+        } finally {
+          await client.query('SELECT pg_advisory_unlock($1, hashtext($2))', [LOCK_NS, id]);
+        }
+      } finally {
+        client.release();
+      }
     }
   }
 
-  /** Claims the oldest pending analysis. O(log n) with the primary key. */
-  private async claim(): Promise<string | null> {
-    const res = await this.db.execute<{ revision_id: string }>(sql`
+  /**
+   * Claims the oldest pending analysis on `client` and takes its advisory lock in the same statement, so no
+   * other process ever sees it running without the lock. O(log n) with the primary key.
+   */
+  private async claim(client: pg.PoolClient): Promise<string | null> {
+    const res = await client.query<{ revision_id: string }>(`
       UPDATE analyses SET status = 'running', progress = 0, started_at = now(), error = NULL
       WHERE revision_id = (
         SELECT a.revision_id FROM analyses a JOIN diagram_revisions r ON r.id = a.revision_id
         WHERE a.status = 'pending' ORDER BY r.created_at LIMIT 1 FOR UPDATE OF a SKIP LOCKED)
-      RETURNING revision_id`);
+      RETURNING revision_id, pg_advisory_lock(${LOCK_NS}, hashtext(revision_id::text)) AS locked`);
     return res.rows[0]?.revision_id ?? null;
   }
 

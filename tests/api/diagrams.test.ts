@@ -273,6 +273,26 @@ describe('analysis queue', () => {
     expect(a.result?.floer?.h1).toBe('Z/3');
   });
 
+  it('leaves a running job alone while another live server holds its lock, and requeues it once that server is gone', async () => {
+    const d = await createFromTemplate(team.editor.agent, team.workspace.id, { kind: 'lens', p: 3, q: 1 });
+    await waitForAnalysis(team.editor.agent, d.id, 1);
+    const rev = await testDb().execute<{ id: string }>(sql`SELECT id FROM diagram_revisions WHERE diagram_id = ${d.id} AND number = 1`);
+    const id = rev.rows[0].id;
+    await testDb().execute(sql`UPDATE analyses SET status = 'running', result = NULL WHERE revision_id = ${id}`);
+    const other = await testDb().$client.connect(); // the "other server": holds the job's lock
+    await other.query('SELECT pg_advisory_lock(7453022, hashtext($1))', [id]);
+    const queue = new AnalysisQueue(testDb(), { log: () => undefined });
+    await queue.start();
+    const status = async () => (await testDb().execute<{ status: string }>(sql`SELECT status FROM analyses WHERE revision_id = ${id}`)).rows[0].status;
+    expect(await status()).toBe('running');
+    await other.query('SELECT pg_advisory_unlock(7453022, hashtext($1))', [id]); // that server stops
+    other.release(true);
+    await queue.start();
+    await queue.whenIdle();
+    await queue.stop();
+    expect(await status()).toBe('done');
+  });
+
   it('leaves a job cut short by shutdown pending for the next start, never failed', async () => {
     const d = await createFromTemplate(team.editor.agent, team.workspace.id, { kind: 'lens', p: 3, q: 1 });
     await waitForAnalysis(team.editor.agent, d.id, 1);
