@@ -181,6 +181,30 @@ describe('the lab in a browser', () => {
     await s.screenshot('lab-upload-broken-obj');
   });
 
+  it('duplicates, renames and deletes a diagram, and Undo brings it back', async () => {
+    await openLibrary(s, libraryUrl);
+    const rows = s.page.getByTestId('diagram-row');
+    const before = await rows.count();
+    const l52 = rows.filter({ has: s.page.getByRole('link', { name: 'L(5,2)', exact: true }) }).first();
+    await l52.getByRole('button', { name: 'Duplicate L(5,2)' }).click();
+    await expect.poll(() => rows.count()).toBe(before + 1);
+    const copy = rows.filter({ has: s.page.getByRole('link', { name: 'L(5,2) (copy)' }) });
+    await copy.getByRole('button', { name: /^Rename/ }).click();
+    const input = s.page.getByLabel('New name for L(5,2) (copy)');
+    await input.fill('L(5,2) scratch');
+    await input.press('Enter');
+    const scratch = rows.filter({ has: s.page.getByRole('link', { name: 'L(5,2) scratch' }) });
+    await scratch.waitFor();
+    await scratch.getByRole('button', { name: 'Delete L(5,2) scratch' }).click();
+    await expect.poll(() => rows.count()).toBe(before);
+    const toast = s.page.getByRole('status').filter({ hasText: 'Deleted “L(5,2) scratch”.' });
+    await toast.waitFor();
+    await s.screenshot('lab-library-undo-toast');
+    await toast.getByRole('button', { name: 'Undo' }).click();
+    await expect.poll(() => rows.count()).toBe(before + 1);
+    await scratch.waitFor();
+  });
+
   it('explains a missing WebGL context in place of the view and keeps the tables working, read-only for a viewer', async () => {
     // Without the software rasterizer Chromium has no WebGL at all (STACK.md).
     const v = await openSignedIn('viewer', undefined, { extraArgs: ['--disable-software-rasterizer'] });

@@ -89,7 +89,7 @@ export function DiagramTable({ workspaceId, diagrams, canEdit, onRename, onDupli
             const stat = (v: React.ReactNode) => (analysing && v === null ? <span className="text-ink-faint">…</span> : v ?? <span className="text-ink-faint">—</span>);
             return (
               <tr key={d.id} className="border-t border-line hover:bg-paper" data-testid="diagram-row">
-                <td className="min-w-[11rem] px-2 py-2">
+                <td className="min-w-[8rem] px-2 py-2">
                   {renaming?.id === d.id ? (
                     <form
                       className="flex items-center gap-2"
@@ -125,8 +125,8 @@ export function DiagramTable({ workspaceId, diagrams, canEdit, onRename, onDupli
                 <td className="px-2 py-2">{analysing && d.nice === null ? <span className="text-ink-faint">…</span> : <YesNo value={d.nice} />}</td>
                 <td className="px-2 py-2">{analysing && d.weaklyAdmissible === null ? <span className="text-ink-faint">…</span> : <YesNo value={d.weaklyAdmissible} />}</td>
                 <td className="px-2 py-2 font-mono text-xs">{stat(d.h1)}</td>
-                <td className="whitespace-nowrap px-2 py-2 text-ink-muted">
-                  <time dateTime={d.updatedAt}>{dateFormat.format(new Date(d.updatedAt))}</time>
+                <td className="min-w-[8rem] px-2 py-2 text-ink-muted">
+                  <time className="whitespace-nowrap" dateTime={d.updatedAt}>{dateFormat.format(new Date(d.updatedAt))}</time>
                   <span className="block text-xs">by {d.updatedBy.name}</span>
                 </td>
                 <td className="px-2 py-2">
