@@ -12,6 +12,7 @@
  * user's file gave the vertex (1-based).
  */
 import { z } from 'zod';
+import { ERROR_STATUS } from './errors.js';
 import { roleSchema } from './workspaces.js';
 
 // ---------------------------------------------------------------------------------------------------------
@@ -240,10 +241,8 @@ export type FileProblem = z.infer<typeof fileProblemSchema>;
  * the geometry, details), computation_failed (the geometry worker crashed or timed out, e.g. a mesh too
  * large for this server).
  */
-export const LAB_ERROR_STATUS = { invalid_file: 422, invalid_operation: 422, computation_failed: 422 } as const;
-export type LabErrorCode = keyof typeof LAB_ERROR_STATUS;
 /** 422 body of a rejected upload. */
-export const INVALID_FILE_STATUS = 422;
+export const INVALID_FILE_STATUS = ERROR_STATUS.invalid_file;
 export const invalidFileErrorSchema = z.object({
   error: z.object({ code: z.literal('invalid_file'), message: z.string(), details: z.array(fileProblemSchema) }),
 });

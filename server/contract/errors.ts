@@ -14,6 +14,12 @@ export const ERROR_STATUS = {
   not_found: 404,
   conflict: 409,
   payload_too_large: 413,
+  /** An uploaded file that is not a valid diagram; details list the problems with line numbers. */
+  invalid_file: 422,
+  /** An edit the geometry refuses (the reason and the place in details). */
+  invalid_operation: 422,
+  /** A computation that crashed or ran out of time in the geometry worker. */
+  computation_failed: 422,
   rate_limited: 429,
   internal: 500,
   unavailable: 503,

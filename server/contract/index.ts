@@ -69,7 +69,6 @@ export { DEV_MAIL_PATH, devMailResponseSchema, type DevMailResponse } from './de
 // --- diagrams (lab-server helper adds its exports here) ---
 export {
   DIAGRAM_PATHS, SHARE_CLIENT_PATH, MAX_UPLOAD_BYTES, MAX_GENERATOR_PAGE, MAX_GENERATOR_OFFSET, MESH_CONTENT_TYPE, INVALID_FILE_STATUS,
-  LAB_ERROR_STATUS, type LabErrorCode,
   curveFamilySchema, basepointKindSchema, curveRefSchema, basepointRefSchema, surfacePointSchema, personSchema,
   analysisStatusSchema, exportFormatSchema, templateSpecSchema, editOperationSchema, revisionOperationSchema,
   diagramSummarySchema, diagramListResponseSchema, diagramSchema, diagramResponseSchema, createDiagramRequestSchema,

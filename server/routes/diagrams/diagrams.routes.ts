@@ -33,7 +33,7 @@ import {
 } from './diagrams.service.js';
 import { describeOperation } from './operations.js';
 import type { StoredDiagram, StoredRow } from './storage.js';
-import { problemDetails, Unprocessable, unprocessableHandler } from './unprocessable.js';
+import { problemDetails, unprocessableHandler } from './unprocessable.js';
 
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 10 } });
 
@@ -92,7 +92,7 @@ function builtOr422(out: BuildOutcome, code: 'invalid_file' | 'invalid_operation
   if (out.ok) return { stored: storedFromWire(out.stored), warnings: out.warnings };
   const first = out.problems[0];
   const where = first?.line !== undefined ? ` (line ${first.line})` : first?.offset !== undefined ? ` (byte ${first.offset})` : '';
-  throw new Unprocessable(code, `${what}${where}: ${first?.message ?? 'unknown problem'}`, problemDetails(out.problems));
+  throw new HttpError(code, `${what}${where}: ${first?.message ?? 'unknown problem'}`, problemDetails(out.problems));
 }
 
 const EXPORT_TYPES = { obj: 'model/obj', off: 'text/plain', ply: 'application/octet-stream', stl: 'model/stl' } as const;
