@@ -4,7 +4,7 @@
  * (the limits below), never attempted.
  */
 import {
-  classesAndGradings, domainLattice, floerSummary, generatorTable, generatorsPage, countGenerators,
+  classesAndGradings, domainLattice, floerSummary, formatH1, generatorTable, generatorsPage, countGenerators,
   type CombinatorialDiagram,
 } from '../../geometry/index.js';
 import type { FloerSummary, GeneratorsPageResponse } from '../contract/diagrams.js';
@@ -17,15 +17,6 @@ export const FLOER_LIMITS = {
 };
 
 export type FloerOutcome = { ok: true; summary: FloerSummary } | { ok: false; reason: string };
-
-/** "0", "Z", "Z/5", "Z^2 ⊕ Z/3" from rank and torsion. */
-export function h1Text(rank: number, torsion: readonly (number | bigint)[]): string {
-  const parts: string[] = [];
-  if (rank === 1) parts.push('Z');
-  else if (rank > 1) parts.push(`Z^${rank}`);
-  for (const t of torsion) parts.push(`Z/${t}`);
-  return parts.length ? parts.join(' ⊕ ') : '0';
-}
 
 function periodicBasis(comb: CombinatorialDiagram): number[][] {
   try {
@@ -44,7 +35,7 @@ export function computeFloer(comb: CombinatorialDiagram, limits = FLOER_LIMITS, 
     const count = s.generators === null ? null : BigInt(s.generators);
     const summary: FloerSummary = {
       generatorCount: s.generators,
-      h1: h1Text(s.h1.rank, s.h1.torsion),
+      h1: formatH1(s.h1),
       b1: s.h1.rank,
       torsion: s.h1.torsion.map(Number),
       h1Order: s.h1.order,
