@@ -236,7 +236,7 @@ export default function SurfaceView(props: SurfaceViewProps) {
   const showLabels = props.showLabels ?? true;
   return (
     <div
-      className="relative h-full w-full overflow-hidden"
+      className="group relative h-full w-full overflow-hidden focus-visible:outline-none"
       role="application"
       aria-roledescription="3D view"
       aria-label={props.ariaLabel}
@@ -319,6 +319,8 @@ export default function SurfaceView(props: SurfaceViewProps) {
           ))}
         </div>
       )}
+      {/* Focus ring drawn above the canvas (an outline on the wrapper would be hidden by it). */}
+      <div aria-hidden="true" className="pointer-events-none absolute inset-0 z-10 rounded-[inherit] group-focus-visible:shadow-[inset_0_0_0_3px_var(--color-focus)]" />
       {renderTooltip && <Tooltip setter={setTooltip} render={renderTooltip} />}
     </div>
   );
