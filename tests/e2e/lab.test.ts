@@ -164,6 +164,16 @@ describe('the lab in a browser', () => {
     await s.page.mouse.move(point!.x, point!.y);
     await s.page.waitForTimeout(400);
     await s.screenshot('lab-s1xs2-bigon-domain');
+    // Saved with a name, cleared, and loaded again from the list.
+    await s.page.getByLabel('Save this domain as').fill('bigon from x1 to x2');
+    await s.page.getByRole('button', { name: 'Save', exact: true }).click();
+    const saved = s.page.getByRole('listitem').filter({ hasText: 'bigon from x1 to x2' });
+    await saved.waitFor();
+    await s.page.getByRole('button', { name: 'Clear' }).click();
+    await expect.poll(() => coefficient.textContent()).toBe('0');
+    await saved.getByRole('button', { name: 'Load' }).click();
+    await expect.poll(() => coefficient.textContent()).toBe('1');
+    await expect.poll(() => s.page.getByTestId('maslov-index').textContent(), { timeout: 20_000 }).toBe('1');
   });
 
   it('shows a broken OBJ upload’s problem with its line number', async () => {
@@ -179,6 +189,19 @@ describe('the lab in a browser', () => {
     await errors.waitFor();
     expect(await errors.textContent()).toContain(`Line ${k + 1}`);
     await s.screenshot('lab-upload-broken-obj');
+  });
+
+  it('uploads a valid OBJ and opens its analysis', async () => {
+    await openLibrary(s, libraryUrl);
+    await s.page.getByRole('button', { name: 'Upload a file' }).click();
+    await s.page.getByLabel('Mesh file (OBJ, PLY, OFF or STL)').setInputFiles(path.join(ROOT, 'tests/fixtures/genus1-standard.obj'));
+    await s.page.getByRole('form', { name: 'Upload a diagram file' }).getByRole('button', { name: 'Upload' }).click();
+    await s.page.waitForURL((u) => u.pathname.includes('/d/'));
+    // tests/fixtures/README.md: a torus with alpha_1 and beta_1 meeting once. REFERENCE.md: Σ_R χ(R) = 2 − 2g + 1 = 1
+    // and Σ_R e(R) = 2 − 2g = 0, so one region, a disk with its four corners at the one point (Lipshitz 2006: e = 1 − 4/4 = 0).
+    const rows = await regionRows(s.page);
+    await expect.poll(() => rows.count()).toBe(1);
+    expect(await rows.first().locator('[data-col="euler"]').textContent()).toBe('0');
   });
 
   it('duplicates, renames and deletes a diagram, and Undo brings it back', async () => {
