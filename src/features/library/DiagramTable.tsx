@@ -10,7 +10,7 @@ interface Column { key: SortKey; label: string; numeric?: boolean }
 const COLUMNS: Column[] = [
   { key: 'name', label: 'Name' },
   { key: 'genus', label: 'Genus', numeric: true },
-  { key: 'curveCount', label: 'Curves', numeric: true },
+  { key: 'curveCount', label: 'Curve pairs', numeric: true },
   { key: 'intersectionCount', label: 'Intersections', numeric: true },
   { key: 'generatorCount', label: 'Generators', numeric: true },
   { key: 'nice', label: 'Nice' },
