@@ -7,6 +7,7 @@ import { NotFoundPage } from './NotFoundPage';
 import { RequireAuth } from './RequireAuth';
 import { RootLayout } from './RootLayout';
 import { RouteErrorPage } from './RouteErrorPage';
+import { SHARE_CLIENT_PATH } from '../../server/contract/index.js';
 
 // Auth and workspace pages are small and part of the first load's likely path; the lab pages (which pull in
 // the 3D viewer) are lazy so three.js ships in its own chunk.
@@ -19,6 +20,7 @@ import WorkspacesPage from '../features/workspaces/WorkspacesPage';
 
 const LibraryPage = lazy(() => import('../features/library/LibraryPage'));
 const DiagramPage = lazy(() => import('../features/diagram/DiagramPage'));
+const SharePage = lazy(() => import('../features/share/SharePage'));
 
 function withSuspense(Page: LazyExoticComponent<ComponentType>, label: string) {
   return (
@@ -68,6 +70,7 @@ export function createAppRouter() {
                 { path: '/invitations/accept', element: <InviteAcceptPage /> },
               ],
             },
+            { path: `${SHARE_CLIENT_PATH}/:token`, handle: fullWidth, element: withSuspense(SharePage, 'Loading the shared diagram…') },
             { path: '*', element: <NotFoundPage /> },
           ],
         },

@@ -9,7 +9,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { DEMO_WORKSPACE_NAME, openSignedIn, type BrowserSession } from './browser';
+import { DEMO_WORKSPACE_NAME, launchBrowser, openSignedIn, type BrowserSession } from './browser';
 
 const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
 const ANALYSIS_TIMEOUT = 90_000;
@@ -129,6 +129,28 @@ describe('the lab in a browser', () => {
     await alert.getByRole('button', { name: 'Reload the latest revision' }).click();
     await s.page.getByText('Revision 4 (latest)').waitFor({ timeout: 30_000 });
     expect(await alert.count()).toBe(0);
+  });
+
+  it('creates a read-only share link that opens without signing in', async () => {
+    const name = (await s.page.getByRole('heading', { level: 1 }).first().textContent()) ?? '';
+    await s.page.getByRole('button', { name: 'Create a share link' }).click();
+    const link = s.page.getByLabel('Share link');
+    await link.waitFor();
+    const url = await link.inputValue();
+    expect(url).toContain('/s/');
+    const anon = await launchBrowser({ viewport: { width: 1280, height: 800 } });
+    try {
+      await anon.page.goto(url);
+      await anon.page.getByRole('heading', { level: 1, name }).waitFor();
+      // The shared page shows the cached analysis: the five rectangles of L(5,2) (REFERENCE.md, lens spaces).
+      const table = anon.page.getByRole('table', { name: 'Regions' });
+      await table.waitFor({ timeout: ANALYSIS_TIMEOUT });
+      await expect.poll(() => table.locator('tbody tr').count()).toBe(5);
+      expect(await anon.page.getByRole('button', { name: 'Midpoint subdivision' }).count()).toBe(0);
+      await anon.screenshot('lab-share-read-only');
+    } finally {
+      await anon.close();
+    }
   });
 
   it('builds a bigon domain on S¹×S² by clicking the surface and reads μ = 1', async () => {
