@@ -51,6 +51,19 @@ async function analysisRegions(page: Page, diagramId: string, revision: number):
   }, { id: diagramId, rev: revision });
 }
 
+/** A visible screen point inside region `id`, turning the camera until the region faces it; null if it never does. */
+async function regionPoint(page: Page, id: number): Promise<{ x: number; y: number } | null> {
+  type Lab = { __quadrantLab?: { regionScreenPoint(r: number): { x: number; y: number } | null } };
+  const look = () => page.evaluate((r) => (window as unknown as Lab).__quadrantLab?.regionScreenPoint(r) ?? null, id);
+  await expect.poll(() => page.evaluate(() => Boolean((window as unknown as Lab).__quadrantLab)), { timeout: 20_000 }).toBe(true);
+  let point = await look();
+  for (let i = 0; i < 12 && !point; i++) {
+    await page.getByRole('button', { name: 'Orbit right' }).click();
+    point = await look();
+  }
+  return point;
+}
+
 describe('the lab in a browser', () => {
   let s: BrowserSession;
   let libraryUrl = '';
@@ -153,6 +166,25 @@ describe('the lab in a browser', () => {
     }
   });
 
+  it('places a w basepoint by clicking the surface, as a new revision', async () => {
+    const id = diagramIdOf(s.page);
+    await s.page.getByRole('tab', { name: 'Draw & edit' }).click();
+    await s.page.getByLabel('Basepoint kind').selectOption('w');
+    await s.page.getByRole('button', { name: 'Place a basepoint' }).click();
+    const before = await analysisRegions(s.page, id, 4);
+    const empty = before.find((r) => r.basepoints.length === 0)!;
+    const point = await regionPoint(s.page, empty.id);
+    expect(point).not.toBeNull();
+    await s.page.mouse.click(point!.x, point!.y);
+    await s.page.getByRole('button', { name: 'Finish' }).click();
+    await s.page.getByText('Revision 5 (latest)').waitFor({ timeout: 30_000 });
+    // One w basepoint in the one component of the complement of each family (REFERENCE.md, multi-pointed diagrams).
+    await s.page.getByRole('tab', { name: 'Regions' }).click();
+    await regionRows(s.page);
+    const after = await analysisRegions(s.page, id, 5);
+    expect(after.find((r) => r.id === empty.id)!.basepoints.some((b) => b.startsWith('w'))).toBe(true);
+  });
+
   it('builds a bigon domain on S¹×S² by clicking the surface and reads μ = 1', async () => {
     await openLibrary(s, libraryUrl);
     await createFromTemplate(s, async (page) => {
@@ -167,15 +199,7 @@ describe('the lab in a browser', () => {
     expect(bigon).toBeDefined();
     await s.page.getByRole('tab', { name: 'Domains' }).click();
     // A screen point inside the bigon, computed from the region's faces and the camera (the view's own projection).
-    await expect.poll(() => s.page.evaluate((r) => (window as unknown as { __quadrantLab?: { regionScreenPoint(r: number): unknown } }).__quadrantLab?.regionScreenPoint(r) ?? null, bigon!.id), { timeout: 20_000 }).not.toBeNull();
-    let point = await s.page.evaluate((r) => (window as unknown as { __quadrantLab: { regionScreenPoint(r: number): { x: number; y: number } | null } }).__quadrantLab.regionScreenPoint(r), bigon!.id);
-    if (!point) {
-      // Turn the camera until the bigon faces it.
-      for (let i = 0; i < 12 && !point; i++) {
-        await s.page.getByRole('button', { name: 'Orbit right' }).click();
-        point = await s.page.evaluate((r) => (window as unknown as { __quadrantLab: { regionScreenPoint(r: number): { x: number; y: number } | null } }).__quadrantLab.regionScreenPoint(r), bigon!.id);
-      }
-    }
+    const point = await regionPoint(s.page, bigon!.id);
     expect(point).not.toBeNull();
     await s.page.mouse.click(point!.x, point!.y);
     const coefficient = s.page.getByRole('table', { name: 'Domain coefficients' }).getByTestId('domain-row').nth(bigon!.id).locator('output');

@@ -335,6 +335,7 @@ export default function DiagramPage() {
             ) : tab === 'edit' ? (
               <EditPanel
                 curves={mesh.data?.curves.map((c) => ({ family: c.family, index: c.index })) ?? []}
+                basepoints={mesh.data?.basepoints.map((b) => ({ kind: b.kind, index: b.index })) ?? []}
                 isHead={isHead} busy={edit.isPending} draw={draw} onDraw={setDraw} onApply={applyEdit}
               />
             ) : !result ? (

@@ -1,21 +1,25 @@
 import { useState } from 'react';
-import type { CurveRef, EditOperationInput, SurfacePoint } from '../../../../server/contract/index.js';
+import type { BasepointRef, CurveRef, EditOperationInput, SurfacePoint } from '../../../../server/contract/index.js';
 import type { Vec3 } from '../../../viewer/types';
 import { Button, SelectField } from '../../../lib/ui';
 import { curveLabel } from '../format';
 
-/** Points picked on the surface for a new curve or a finger move. */
+/** Points picked on the surface for a new curve, a finger move, or where a basepoint goes. */
 export interface DrawState {
-  purpose: 'curve' | 'finger';
+  purpose: 'curve' | 'finger' | 'basepoint';
   family: 'alpha' | 'beta';
   /** For a finger move: the curve pushed along the path. */
   curve: CurveRef | null;
+  /** For placing a basepoint: the one moved (null adds a new basepoint of `kind`). */
+  basepoint?: BasepointRef | null;
+  kind?: 'z' | 'w';
   points: SurfacePoint[];
   world: Vec3[];
 }
 
 export interface EditPanelProps {
   curves: CurveRef[];
+  basepoints: BasepointRef[];
   isHead: boolean;
   busy: boolean;
   draw: DrawState | null;
@@ -26,15 +30,43 @@ export interface EditPanelProps {
 const refKey = (c: CurveRef) => `${c.family}:${c.index}`;
 const parseRef = (k: string): CurveRef => { const [family, index] = k.split(':'); return { family: family as 'alpha' | 'beta', index: Number(index) }; };
 const labelOf = (k: string) => { const r = parseRef(k); return curveLabel(r.family, r.index); };
+const SUBSCRIPT = '₀₁₂₃₄₅₆₇₈₉';
+const basepointLabel = (b: BasepointRef) => `${b.kind}${String(b.index + 1).replace(/\d/g, (c) => SUBSCRIPT[Number(c)])}`;
+const basepointKey = (b: BasepointRef) => `${b.kind}:${b.index}`;
+
+/** What the picked points are for, in words. */
+function drawTitle(draw: DrawState): string {
+  if (draw.purpose === 'curve') return `Drawing a new ${draw.family === 'alpha' ? 'α' : 'β'} curve`;
+  if (draw.purpose === 'finger') return `Finger move of ${draw.curve ? curveLabel(draw.curve.family, draw.curve.index) : ''}`;
+  return draw.basepoint ? `Moving ${basepointLabel(draw.basepoint)}` : `Placing a new ${draw.kind ?? 'z'} basepoint`;
+}
+
+/** The edit a finished pick makes, with its history message; null when not enough points are picked. */
+function finishedEdit(draw: DrawState): [EditOperationInput, string] | null {
+  const last = draw.points[draw.points.length - 1];
+  if (draw.purpose === 'curve') return draw.points.length >= 3 ? [{ type: 'draw-curve', family: draw.family, points: draw.points, closed: true }, `Drew a ${draw.family} curve`] : null;
+  if (draw.purpose === 'finger') return draw.curve && draw.points.length >= 2 ? [{ type: 'finger-move', curve: draw.curve, path: draw.points }, `Finger move of ${curveLabel(draw.curve.family, draw.curve.index)}`] : null;
+  if (!last) return null;
+  return draw.basepoint
+    ? [{ type: 'move-basepoint', basepoint: draw.basepoint, at: last }, `Moved ${basepointLabel(draw.basepoint)}`]
+    : [{ type: 'add-basepoint', kind: draw.kind ?? 'z', at: last }, `Placed a ${draw.kind ?? 'z'} basepoint`];
+}
 
 /** Drawing curves and the server's operations; each applied change becomes a new revision. */
-export function EditPanel({ curves, isHead, busy, draw, onDraw, onApply }: EditPanelProps) {
+export function EditPanel({ curves, basepoints, isHead, busy, draw, onDraw, onApply }: EditPanelProps) {
   const options = curves.map((c) => ({ value: refKey(c), label: curveLabel(c.family, c.index) }));
   const [family, setFamily] = useState<'alpha' | 'beta'>('alpha');
   const [twistCurve, setTwistCurve] = useState(options.find((o) => o.value.startsWith('beta'))?.value ?? options[0]?.value ?? '');
   const [twistAlong, setTwistAlong] = useState(options.find((o) => o.value.startsWith('alpha'))?.value ?? options[0]?.value ?? '');
   const [negative, setNegative] = useState(false);
   const [fingerCurve, setFingerCurve] = useState(options.find((o) => o.value.startsWith('beta'))?.value ?? options[0]?.value ?? '');
+  const [curveToChange, setCurveToChange] = useState(options[0]?.value ?? '');
+  const [newNumber, setNewNumber] = useState('1');
+  const [kind, setKind] = useState<'z' | 'w'>('z');
+  const bpOptions = basepoints.map((b) => ({ value: basepointKey(b), label: basepointLabel(b) }));
+  const [bpToChange, setBpToChange] = useState(bpOptions[0]?.value ?? '');
+  const bpRef = (k: string): BasepointRef => { const [kd, i] = k.split(':'); return { kind: kd as 'z' | 'w', index: Number(i) }; };
+  const finished = draw ? finishedEdit(draw) : null;
 
   if (!isHead) {
     return <p className="text-sm text-ink-muted">You are viewing an older revision. Edits apply to the latest revision; restore this one from History to continue from it.</p>;
@@ -53,18 +85,15 @@ export function EditPanel({ curves, isHead, busy, draw, onDraw, onApply }: EditP
         ) : (
           <div className="flex flex-col gap-2 rounded-md border border-accent/40 bg-accent-soft p-3">
             <p role="status" aria-live="polite">
-              {draw.purpose === 'curve' ? `Drawing a new ${draw.family === 'alpha' ? 'α' : 'β'} curve` : `Finger move of ${draw.curve ? curveLabel(draw.curve.family, draw.curve.index) : ''}`}:
-              {' '}{draw.points.length} point{draw.points.length === 1 ? '' : 's'} picked. Click on the surface to add points
-              {draw.purpose === 'curve' ? '; the curve closes back to the first point.' : ', starting next to the curve.'}
+              {drawTitle(draw)}:{' '}{draw.points.length} point{draw.points.length === 1 ? '' : 's'} picked.{' '}
+              {draw.purpose === 'curve' ? 'Click on the surface to add points; the curve closes back to the first point.'
+                : draw.purpose === 'finger' ? 'Click on the surface to add points, starting next to the curve.'
+                  : 'Click the place on the surface, away from the curves; the last click counts.'}
             </p>
             <div className="flex flex-wrap gap-2">
               <Button size="sm" variant="secondary" disabled={draw.points.length === 0} onClick={() => onDraw({ ...draw, points: draw.points.slice(0, -1), world: draw.world.slice(0, -1) })}>Undo last point</Button>
               <Button size="sm" variant="ghost" onClick={() => onDraw(null)}>Cancel</Button>
-              <Button size="sm" disabled={draw.points.length < (draw.purpose === 'curve' ? 3 : 2) || busy} loading={busy}
-                onClick={() => {
-                  if (draw.purpose === 'curve') onApply({ type: 'draw-curve', family: draw.family, points: draw.points, closed: true }, `Drew a ${draw.family} curve`);
-                  else if (draw.curve) onApply({ type: 'finger-move', curve: draw.curve, path: draw.points }, `Finger move of ${curveLabel(draw.curve.family, draw.curve.index)}`);
-                }}>
+              <Button size="sm" disabled={!finished || busy} loading={busy} onClick={() => finished && onApply(...finished)}>
                 Finish
               </Button>
             </div>
@@ -98,6 +127,48 @@ export function EditPanel({ curves, isHead, busy, draw, onDraw, onApply }: EditP
             Pick its path
           </Button>
         </div>
+      </section>
+
+      <section aria-labelledby="curves-title" className="flex flex-col gap-2">
+        <h3 id="curves-title" className="font-semibold">Curves and basepoints</h3>
+        {options.length > 0 && (
+          <div className="flex flex-wrap items-end gap-2">
+            <SelectField label="Curve" value={curveToChange} onChange={(e) => setCurveToChange(e.target.value)} options={options} />
+            <Button variant="danger" size="sm" disabled={busy || drawing || !curveToChange}
+              onClick={() => onApply({ type: 'delete-curve', curve: parseRef(curveToChange) }, `Deleted ${labelOf(curveToChange)}`)}>
+              Delete the curve
+            </Button>
+            <label className="flex flex-col gap-1">
+              <span className="text-ink-muted">New number</span>
+              <input type="number" min={1} value={newNumber} onChange={(e) => setNewNumber(e.target.value)} className="h-8 w-20 rounded-md border border-line-strong px-2" />
+            </label>
+            <Button variant="secondary" size="sm" disabled={busy || drawing || !curveToChange || !(Number(newNumber) >= 1)}
+              onClick={() => { const c = parseRef(curveToChange); onApply({ type: 'rename-curve', curve: c, index: Number(newNumber) - 1 }, `Renumbered ${labelOf(curveToChange)} as ${curveLabel(c.family, Number(newNumber) - 1)}`); }}>
+              Renumber
+            </Button>
+          </div>
+        )}
+        <div className="flex flex-wrap items-end gap-2">
+          <SelectField label="Basepoint kind" value={kind} onChange={(e) => setKind(e.target.value as 'z' | 'w')}
+            options={[{ value: 'z', label: 'z (avoided by HF-hat)' }, { value: 'w', label: 'w (second set)' }]} />
+          <Button variant="secondary" size="sm" disabled={busy || drawing}
+            onClick={() => onDraw({ purpose: 'basepoint', family: 'alpha', curve: null, basepoint: null, kind, points: [], world: [] })}>
+            Place a basepoint
+          </Button>
+        </div>
+        {bpOptions.length > 0 && (
+          <div className="flex flex-wrap items-end gap-2">
+            <SelectField label="Basepoint" value={bpToChange} onChange={(e) => setBpToChange(e.target.value)} options={bpOptions} />
+            <Button variant="secondary" size="sm" disabled={busy || drawing || !bpToChange}
+              onClick={() => onDraw({ purpose: 'basepoint', family: 'alpha', curve: null, basepoint: bpRef(bpToChange), points: [], world: [] })}>
+              Move it
+            </Button>
+            <Button variant="danger" size="sm" disabled={busy || drawing || !bpToChange}
+              onClick={() => onApply({ type: 'remove-basepoint', basepoint: bpRef(bpToChange) }, `Removed ${basepointLabel(bpRef(bpToChange))}`)}>
+              Remove it
+            </Button>
+          </div>
+        )}
       </section>
 
       <section aria-labelledby="subdivide-title" className="flex flex-col gap-2">
