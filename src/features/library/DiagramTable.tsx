@@ -131,7 +131,7 @@ export function DiagramTable({ workspaceId, diagrams, canEdit, onRename, onDupli
                 </td>
                 <td className="px-2 py-2">
                   {canEdit && (
-                    <div className="flex justify-end gap-0.5">
+                    <div className="grid w-[9.5rem] grid-cols-2 justify-items-end gap-x-1">
                       <Button size="sm" variant="ghost" onClick={() => setRenaming({ id: d.id, name: d.name })} aria-label={`Rename ${d.name}`} className="px-2">Rename</Button>
                       <Button size="sm" variant="ghost" onClick={() => onDuplicate(d)} loading={busyId === d.id} aria-label={`Duplicate ${d.name}`} className="px-2">Duplicate</Button>
                       <Button size="sm" variant="ghost" onClick={() => onDelete(d)} aria-label={`Delete ${d.name}`} className="px-2 hover:text-danger">Delete</Button>
