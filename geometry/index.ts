@@ -5,7 +5,7 @@
 
 // --- base ---
 export type { Result, Problem } from './base/result.js';
-export { ok, fail } from './base/result.js';
+export { ok, fail, unwrap } from './base/result.js';
 export { assert, InvariantError } from './base/assert.js';
 export type { VertexId, FaceId, HalfEdgeId, RegionId } from './base/ids.js';
 export { cornerAngle, dist2, doubleArea } from './base/vec.js';

@@ -19,3 +19,12 @@ export interface Problem {
 
 export const ok = <T>(value: T): Result<T, never> => ({ ok: true, value });
 export const fail = <E = Problem>(...errors: E[]): Result<never, E> => ({ ok: false, errors });
+
+/**
+ * The value of an ok Result, else throws with the problems listed. For tests, scripts and places where a
+ * failure is a bug in Quadrant; user input is handled by inspecting the Result instead. O(1).
+ */
+export function unwrap<T>(r: Result<T, unknown>): T {
+  if (!r.ok) throw new Error(`expected a value, got problems: ${JSON.stringify(r.errors)}`);
+  return r.value;
+}

@@ -1,13 +1,10 @@
+import { unwrap } from '../base/result.js';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { analyzeDiagram, buildTemplate, torusGridVertex, validateConnectivity, type HeegaardDiagram } from '../index.js';
 import { deleteCurve, renameCurve, addBasepoint, moveBasepoint, removeBasepoint } from './curve-ops.js';
 import { addCurve, drawCurve, shortestPath, type SurfacePoint } from './draw.js';
 
-const unwrap = <T>(r: { ok: true; value: T } | { ok: false; errors: unknown[] }): T => {
-  if (!r.ok) throw new Error(JSON.stringify(r.errors));
-  return r.value;
-};
 // S^3 on a 32 x 16 torus grid with beta deleted: only alpha_1 = column 0 and z_1 remain.
 const nu = 32, nv = 16, o = { nu, nv };
 const g = (i: number, j: number) => torusGridVertex(o, i, j);

@@ -1,11 +1,8 @@
+import { unwrap } from '../base/result.js';
 import { describe, expect, it } from 'vitest';
 import { addCurve, analyzeDiagram, buildTemplate, deleteCurve, shortestPath, torusGridVertex, type HeegaardDiagram } from '../index.js';
 import { smoothCurves } from './smooth.js';
 
-const unwrap = <T>(r: { ok: true; value: T } | { ok: false; errors: unknown[] }): T => {
-  if (!r.ok) throw new Error(JSON.stringify(r.errors));
-  return r.value;
-};
 const curveLength = (d: HeegaardDiagram, c: number) => {
   const P = d.mesh.pos, vs = d.curves[c].vertices;
   let L = 0;

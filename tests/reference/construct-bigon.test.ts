@@ -1,11 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { analyzeDiagram, buildTemplate, fingerMove, floerSummary, toCombinatorial, torusGridVertex, type HeegaardDiagram } from '../../geometry/index.js';
+import { analyzeDiagram, buildTemplate, fingerMove, floerSummary, toCombinatorial, torusGridVertex, type HeegaardDiagram, unwrap } from '../../geometry/index.js';
 import { removeBigon } from '../../geometry/construct/bigon.js';
 
-const unwrap = <T>(r: { ok: true; value: T } | { ok: false; errors: unknown[] }): T => {
-  if (!r.ok) throw new Error(JSON.stringify(r.errors));
-  return r.value;
-};
 const analyse = (d: HeegaardDiagram) => {
   const a = unwrap(analyzeDiagram(d));
   expect(a.defects).toEqual([]);

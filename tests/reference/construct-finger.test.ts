@@ -1,14 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { analyzeDiagram, torusGridVertex, validateConnectivity, type HeegaardDiagram } from '../../geometry/index.js';
+import { analyzeDiagram, torusGridVertex, validateConnectivity, type HeegaardDiagram, unwrap } from '../../geometry/index.js';
 import { buildTemplate } from '../../geometry/construct/templates.js';
 import { fingerMove } from '../../geometry/construct/finger.js';
 import { fan } from '../../geometry/construct/labels.js';
 
-const unwrap = <T>(r: { ok: true; value: T } | { ok: false; errors: unknown[] }): T => {
-  if (!r.ok) throw new Error(JSON.stringify(r.errors));
-  return r.value;
-};
 const analyse = (d: HeegaardDiagram) => {
   const a = unwrap(analyzeDiagram(d));
   expect(a.defects).toEqual([]);

@@ -1,13 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { analyzeDiagram, validateConnectivity, type HeegaardDiagram } from '../../geometry/index.js';
+import { analyzeDiagram, validateConnectivity, type HeegaardDiagram, unwrap } from '../../geometry/index.js';
 import { buildTemplate } from '../../geometry/construct/templates.js';
 import { subdivideDiagram } from '../../geometry/construct/subdivide.js';
 import { dehnTwist } from '../../geometry/construct/twist.js';
 
-const unwrap = <T>(r: { ok: true; value: T } | { ok: false; errors: unknown[] }): T => {
-  if (!r.ok) throw new Error(JSON.stringify(r.errors));
-  return r.value;
-};
 /** Region signature: sorted (chi, corners, Euler measure) triples. */
 const signature = (d: HeegaardDiagram) => {
   const a = unwrap(analyzeDiagram(d));

@@ -1,15 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { analyzeDiagram, toCombinatorial, type HeegaardDiagram } from '../../geometry/index.js';
+import { analyzeDiagram, toCombinatorial, type HeegaardDiagram, unwrap } from '../../geometry/index.js';
 import fc from 'fast-check';
 import { firstHomology } from '../../geometry/floer/homology-h1.js';
 import { floerSummary } from '../../geometry/index.js';
 import { buildTemplate } from '../../geometry/construct/templates.js';
 import { curveIndexByName, dehnTwist } from '../../geometry/construct/twist.js';
 
-const unwrap = <T>(r: { ok: true; value: T } | { ok: false; errors: unknown[] }): T => {
-  if (!r.ok) throw new Error(JSON.stringify(r.errors));
-  return r.value;
-};
 
 /** Homology class (winding around the axis, winding around the tube) of a curve on the torus of revolution R = 2. */
 function torusClass(d: HeegaardDiagram, c: number): [number, number] {
