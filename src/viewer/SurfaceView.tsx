@@ -117,6 +117,15 @@ function CameraRig({ sphere, surfaceRef, positions, triangles, handle }: RigProp
       const rect = gl.domElement.getBoundingClientRect();
       return { x: rect.left + ((ndc.x + 1) / 2) * rect.width, y: rect.top + ((1 - ndc.y) / 2) * rect.height };
     },
+    snapshot(scale = 2) {
+      const ratio = gl.getPixelRatio();
+      gl.setPixelRatio(ratio * scale);
+      gl.render(scene, camera);
+      const url = gl.domElement.toDataURL('image/png');
+      gl.setPixelRatio(ratio);
+      invalidate();
+      return url;
+    },
   }), [camera, controls, gl, invalidate, place, positions, raycaster, scene, sphere.center, surfaceRef, triangles]);
   return null;
 }
@@ -164,6 +173,7 @@ export default function SurfaceView(props: SurfaceViewProps) {
     zoom: (f) => handle.current?.zoom(f),
     focusFace: (f) => handle.current?.focusFace(f),
     projectFace: (f) => handle.current?.projectFace(f) ?? null,
+    snapshot: (scale) => handle.current?.snapshot(scale) ?? null,
   }), []);
 
   const report = useCallback((pick: ViewerPick | null) => {

@@ -55,6 +55,11 @@ export interface SurfaceViewHandle {
    * (visible, unoccluded, inside the canvas); otherwise null.
    */
   projectFace(face: number): { x: number; y: number } | null;
+  /**
+   * The current view (surface, curves, points; not the text labels) as a PNG data URL at `scale` times the
+   * screen resolution (default 2), for figures; null before the view is ready.
+   */
+  snapshot(scale?: number): string | null;
 }
 
 export interface SurfaceViewProps {

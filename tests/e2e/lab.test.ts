@@ -104,6 +104,21 @@ describe('the lab in a browser', () => {
     await s.screenshot('lab-lens-L52-regions');
   });
 
+  it('saves the view as a PNG figure at twice the screen resolution', async () => {
+    const [download] = await Promise.all([
+      s.page.waitForEvent('download'),
+      s.page.getByRole('button', { name: 'Save image' }).click(),
+    ]);
+    expect(download.suggestedFilename()).toMatch(/^L\(5,2\).*\.png$/);
+    const file = path.join(ROOT, 'test-artifacts', 'lab-figure-L52.png');
+    await download.saveAs(file);
+    const png = readFileSync(file);
+    // PNG signature and IHDR width (W3C PNG specification, 2003, §5.2 and §11.2.2).
+    expect(png.subarray(1, 4).toString('latin1')).toBe('PNG');
+    const canvasWidth = await s.page.locator('canvas').first().evaluate((c) => (c as HTMLCanvasElement).clientWidth);
+    expect(png.readUInt32BE(16)).toBeGreaterThanOrEqual(2 * canvasWidth - 2);
+  });
+
   it('applies an edit as a new revision and restores the older revision', async () => {
     await s.page.getByRole('tab', { name: 'Draw & edit' }).click();
     await s.page.getByRole('button', { name: 'Midpoint subdivision' }).click();

@@ -305,6 +305,7 @@ export default function DiagramPage() {
       <div className="grid min-h-0 flex-1 gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(30rem,40%)]">
         <div className="h-[60vh] min-h-0 lg:h-full">
           <ViewPane
+            imageName={`${d.name} r${rev ?? ''}`}
             view={mesh.data ? {
               positions: mesh.data.positions, triangles: mesh.data.triangles, curves, points,
               faceColors: colors.faceColors, vertexColors: colors.vertexColors,

@@ -26,6 +26,8 @@ export function Legend({ title, extent, unit }: { title: string; extent: number;
 export interface ViewPaneProps {
   view: Omit<SurfaceViewProps, 'handleRef' | 'ariaLabel'> | null;
   ariaLabel: string;
+  /** File name (without extension) for a saved image of the view. */
+  imageName: string;
   handle: React.RefObject<SurfaceViewHandle | null>;
   colorMode: ColorMode;
   colorModes: ColorMode[];
@@ -41,6 +43,15 @@ export interface ViewPaneProps {
   loading: string | null;
 }
 
+/** Downloads a PNG data URL as `<name>.png`. */
+function saveImage(url: string | null, name: string) {
+  if (!url) return;
+  const a = document.createElement('a');
+  a.href = url;
+  a.download = `${name.replace(/[^\p{L}\p{N}()×,._ -]+/gu, '_').trim() || 'diagram'}.png`;
+  a.click();
+}
+
 /** Toolbar, the 3D view (lazily loaded, inside the WebGL boundary), legend and the current mode's hint. */
 export function ViewPane(p: ViewPaneProps) {
   const h = p.handle;
@@ -53,6 +64,7 @@ export function ViewPane(p: ViewPaneProps) {
         <Button size="sm" variant="secondary" onClick={() => h.current?.zoom(1.25)} aria-label="Zoom out">−</Button>
         <Button size="sm" variant="secondary" onClick={() => h.current?.orbit(-0.35, 0)} aria-label="Orbit left">⟲</Button>
         <Button size="sm" variant="secondary" onClick={() => h.current?.orbit(0.35, 0)} aria-label="Orbit right">⟳</Button>
+        <Button size="sm" variant="secondary" onClick={() => saveImage(h.current?.snapshot(2) ?? null, p.imageName)}>Save image</Button>
         <label className="ml-2 flex items-center gap-1.5 text-sm">
           <span className="text-ink-muted">Colour by</span>
           <select className="h-8 w-auto rounded-md border border-line-strong bg-surface px-2 text-sm" value={p.colorMode} onChange={(e) => p.onColorMode(e.target.value as ColorMode)}>
