@@ -90,7 +90,7 @@ export type { GeneratorTable } from './floer/hf-hat.js';
 export { hfHatNice, generatorTable } from './floer/hf-hat.js';
 export type { ClassesAndGradings } from './floer/spinc-grading.js';
 export { classesAndGradings } from './floer/spinc-grading.js';
-export type { FloerSummary, FloerSummaryOptions, GeneratorGradings } from './floer/summary.js';
+export type { FloerSummary, FloerSummaryOptions, GeneratorGradings, SignedCountCheck } from './floer/summary.js';
 export { floerSummary, floerReportFields, generatorGradings, findDomain } from './floer/summary.js';
 export type { GridMarking } from './floer/model-diagrams.js';
 export {

@@ -5,7 +5,7 @@
  */
 import { nonNegativePeriodic } from './admissibility-lp.js';
 import type { CombinatorialDiagram } from './combinatorics.js';
-import { countGenerators } from './generators.js';
+import { countGenerators, forEachGenerator, generatorSign } from './generators.js';
 import { hfHatNice, type SpincHomology } from './hf-hat.js';
 import { firstHomology, type H1Summary } from './homology-h1.js';
 import { blockedRegions, domainBetween, domainLattice, type BlockedBasepoints, type DomainLattice } from './lattice.js';
@@ -44,6 +44,34 @@ export interface FloerSummary {
   notNiceRegions?: NotNiceRegion[];
   hfHat: { rank: number; rawRank: number; bySpinc: SpincHomology[] } | null;
   hfHatReason?: string;
+  /**
+   * The signed count of generators, Σ sign(x), beside det M; for a rational homology sphere with k = g also
+   * |H_1(Y)|, which it must equal up to sign (Ozsváth–Szabó 2004: χ(HF-hat(Y)) = ±|H_1(Y)|). Absent when
+   * there are more generators than the limit.
+   */
+  signedCount?: SignedCountCheck;
+}
+
+export interface SignedCountCheck {
+  /** Σ over generators of sign(σ) · Π local signs, decimal. */
+  value: string;
+  /** det M of the algebraic intersection matrix, decimal. */
+  determinant: string;
+  /** |H_1(Y)| when Y is a rational homology sphere and k = g, else null. */
+  h1Order: string | null;
+  /** value = det M, and |value| = |H_1(Y)| when h1Order is given. */
+  agrees: boolean;
+}
+
+/** Enumerates the generators once to add their signs. O(#generators · k^2). */
+function signedCountCheck(comb: CombinatorialDiagram, h1: H1Summary): SignedCountCheck {
+  let total = 0;
+  forEachGenerator(comb, (x) => { total += generatorSign(comb, x); });
+  const h1Order = comb.curveCount === comb.genus && h1.rank === 0 ? h1.order : null;
+  const value = BigInt(total);
+  const abs = value < 0n ? -value : value;
+  const agrees = value === BigInt(h1.determinant) && (h1Order === null || abs === BigInt(h1Order));
+  return { value: value.toString(), determinant: h1.determinant, h1Order, agrees };
 }
 
 /** Checks that make HF-hat meaningful for this diagram, else the reason in words. */
@@ -84,6 +112,7 @@ export function floerSummary(comb: CombinatorialDiagram, options: FloerSummaryOp
   };
   if (offending) out.offendingPeriodicDomain = offending;
   if (!niceR.nice) out.notNiceRegions = niceR.notNiceRegions;
+  if (count !== null && count <= BigInt(limit)) out.signedCount = signedCountCheck(comb, h1);
   const obstacle = options.skipHomology ? 'not requested' : hfHatObstacle(comb, count, limit, weaklyAdmissible, niceR.nice, lattice);
   if (obstacle) { out.hfHatReason = obstacle; return out; }
   try {
@@ -112,6 +141,7 @@ export function floerReportFields(comb: CombinatorialDiagram, options: FloerSumm
     nice: s.nice,
     ...(s.notNiceRegions ? { notNiceRegions: s.notNiceRegions.map((r) => ({ ...r, region: r.region + 1 })) } : {}),
     hfHat: s.hfHat,
+    ...(s.signedCount ? { signedCount: s.signedCount } : {}),
     ...(s.hfHatReason ? { hfHatReason: s.hfHatReason } : {}),
   };
 }

@@ -59,6 +59,7 @@ describe('quadrant analyze (command line)', () => {
     expect(r.status).toBe(0);
     expect(r.stdout).toContain('H_1(Y) = Z/3');
     expect(r.stdout).toContain('HF-hat: rank 3');
+    expect(r.stdout).toMatch(/signed count of generators: -?3 \(det M = -?3, ±\|H_1\| = ±3\) — agrees/);
     expect(r.stdout.match(/spin\^c .*: 1 generator, rank 1/g)).toHaveLength(3);
   });
 

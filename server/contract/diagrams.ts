@@ -412,6 +412,11 @@ export const floerSummarySchema = z.object({
   homologyUnavailable: z.string().nullable(),
   /** Whether the generators endpoint gives spin^c classes and gradings (false past the limit). */
   generatorsClassified: z.boolean(),
+  /**
+   * Σ sign(x) over the generators beside det M and, for rational homology spheres with k = g, |H_1(Y)|
+   * (Ozsváth–Szabó 2004: χ(HF-hat) = ±|H_1|). Absent past the generator limit and in older analyses.
+   */
+  signedCount: z.object({ value: z.string(), determinant: z.string(), h1Order: z.string().nullable(), agrees: z.boolean() }).nullish(),
 });
 export type FloerSummary = z.infer<typeof floerSummarySchema>;
 

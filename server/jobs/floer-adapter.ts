@@ -18,15 +18,6 @@ export const FLOER_LIMITS = {
 
 export type FloerOutcome = { ok: true; summary: FloerSummary } | { ok: false; reason: string };
 
-function periodicBasis(comb: CombinatorialDiagram): number[][] {
-  try {
-    return domainLattice(comb, 'z').periodic.map((p) => Array.from(p));
-  } catch (e) {
-    if (e instanceof RangeError) return [];
-    throw e;
-  }
-}
-
 /** Runs floerSummary and maps it. Never throws for user data. */
 export function computeFloer(comb: CombinatorialDiagram, limits = FLOER_LIMITS, onProgress?: (f: number) => void): FloerOutcome {
   if (comb.curveCount === 0) return { ok: false, reason: 'The diagram has no alpha and beta curves yet.' };
@@ -39,7 +30,7 @@ export function computeFloer(comb: CombinatorialDiagram, limits = FLOER_LIMITS, 
       b1: s.h1.rank,
       torsion: s.h1.torsion.map(Number),
       h1Order: s.h1.order,
-      periodicDomains: periodicBasis(comb).map((coefficients) => ({ coefficients })),
+      periodicDomains: s.periodicDomainBasis.map((coefficients) => ({ coefficients })),
       weaklyAdmissible: s.weaklyAdmissible,
       admissibilityWitness: s.offendingPeriodicDomain ? { coefficients: s.offendingPeriodicDomain } : null,
       nice: s.nice,
@@ -56,6 +47,7 @@ export function computeFloer(comb: CombinatorialDiagram, limits = FLOER_LIMITS, 
         : null,
       homologyUnavailable: s.hfHat ? null : (s.hfHatReason ?? 'not computed'),
       generatorsClassified: count !== null && count <= BigInt(limits.maxClassifiedGenerators),
+      signedCount: s.signedCount ?? null,
     };
     return { ok: true, summary };
   } catch (e) {

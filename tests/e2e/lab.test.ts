@@ -99,6 +99,8 @@ describe('the lab in a browser', () => {
     // Ozsváth–Szabó 2004: H_1(L(5,2)) = Z/5 and rank HF-hat(L(5,2)) = 5.
     await expect.poll(() => s.page.getByTestId('h1').textContent()).toContain('5');
     await expect.poll(() => s.page.getByTestId('hf-rank').textContent()).toBe('5');
+    // χ(HF-hat) = ±|H_1| (Ozsváth–Szabó 2004): the signed count of the 5 generators is ±5.
+    expect(await s.page.getByTestId('signed-count').textContent()).toMatch(/Σ sign\(x\) = -?5 .*agrees/);
     await s.page.getByRole('tab', { name: 'Regions' }).click();
     await s.page.waitForTimeout(500);
     await s.screenshot('lab-lens-L52-regions');

@@ -65,6 +65,9 @@ describe('HF-hat of lens spaces (Ozsváth–Szabó 2004: rank p, H_1 = Z/p, each
       expect(s.generators).toBe(String(p));
       expect(s.h1.torsion).toEqual([p]);
       expect(Math.abs(Number(s.h1.determinant))).toBe(p); // signed generator count = ±|H_1| (Ozsváth–Szabó 2004)
+      // The enumerated signed count checks itself against det M and ±|H_1(L(p,q))| = ±p (Ozsváth–Szabó 2004).
+      expect(s.signedCount).toMatchObject({ h1Order: String(p), agrees: true });
+      expect(Math.abs(Number(s.signedCount!.value))).toBe(p);
       expect(s.hfHat?.rank).toBe(p);
       expect(s.hfHat?.bySpinc).toHaveLength(p);
     });
@@ -79,6 +82,8 @@ describe('multi-pointed grid diagrams of S^3 (Manolescu–Ozsváth–Sarkar 2009
       expect(s).toMatchObject({ nice: true, weaklyAdmissible: true, h1: { rank: 0, torsion: [] } });
       expect(s.hfHat?.rawRank).toBe(2 ** (n - 1));
       expect(s.hfHat?.rank).toBe(1);
+      // k > g: the signed count is det of the all-ones matrix, 0 for n ≥ 2 (REFERENCE.md, H_1 examples); no |H_1| check.
+      expect(s.signedCount).toMatchObject({ value: n === 1 ? '1' : '0', h1Order: null, agrees: true });
       // V^{n-1} with V = F_(0) ⊕ F_(-1): binomial coefficients by grading (MOS 2009, §2)
       const binom = (k: number) => { let b = 1; for (let i = 0; i < k; i++) b = (b * (n - 1 - i)) / (i + 1); return b; };
       expect(s.hfHat?.bySpinc[0].byGrading.map((g) => g.rawRank)).toEqual([...Array(n).keys()].map(binom));

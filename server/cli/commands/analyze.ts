@@ -52,6 +52,8 @@ function floerText(f: Partial<FloerSummary>): string[] {
     `H_1(Y) = ${formatH1(f.h1)}`,
     `periodic domains: ${f.periodicDomains ?? 0}; weakly admissible: ${yesNo(f.weaklyAdmissible)}` +
       (f.offendingPeriodicDomain ? ` (non-negative periodic domain ${regionList(f.offendingPeriodicDomain)})` : ''),
+    ...(f.signedCount ? [`signed count of generators: ${f.signedCount.value} (det M = ${f.signedCount.determinant}` +
+      `${f.signedCount.h1Order ? `, ±|H_1| = ±${f.signedCount.h1Order}` : ''}) — ${f.signedCount.agrees ? 'agrees' : 'DOES NOT AGREE (please report)'}`] : []),
     `nice: ${yesNo(f.nice)}` +
       (f.notNiceRegions?.length ? ` (not bigons or squares: ${f.notNiceRegions.map((r) => `R_${r.region}`).join(', ')})` : ''),
   ];

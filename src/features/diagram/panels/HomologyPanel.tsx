@@ -36,6 +36,20 @@ export function HomologyPanel({ floer, unavailable, onShowPeriodic, onShowRegion
         <dt className="text-ink-muted">Generators</dt>
         <dd className="tabular-nums">{floer.generatorCount ?? 'too many to count'}</dd>
         {floer.h1Order && <><dt className="text-ink-muted">|H₁(Y)|</dt><dd className="tabular-nums">{floer.h1Order}</dd></>}
+        {floer.signedCount && (
+          <>
+            <dt className="text-ink-muted">Signed count</dt>
+            <dd data-testid="signed-count">
+              <span className="tabular-nums">Σ sign(x) = {floer.signedCount.value}</span>{' '}
+              <span className="text-ink-muted">
+                (det M = {floer.signedCount.determinant}{floer.signedCount.h1Order ? `; ±|H₁| = ±${floer.signedCount.h1Order}` : ''})
+              </span>{' '}
+              <span className={floer.signedCount.agrees ? 'font-semibold text-ok' : 'font-semibold text-danger'}>
+                {floer.signedCount.agrees ? 'agrees' : 'does not agree — please report'}
+              </span>
+            </dd>
+          </>
+        )}
         <dt className="text-ink-muted">Weakly admissible</dt>
         <dd className="flex flex-wrap items-center gap-2">
           <YesNo ok={floer.weaklyAdmissible} yes="Yes" no="No" />
