@@ -19,6 +19,8 @@ export {
 export type { SurfaceStats } from './mesh/validate.js';
 export { validateSurface, surfaceStats, isWarning, SURFACE_WARNING_CODES } from './mesh/validate.js';
 
+export { taubinSmooth } from './mesh/taubin.js';
+
 // --- io ---
 export type { MeshFile, CurveEdges, BasepointMark } from './io/mesh-file.js';
 export { mergePositions } from './io/mesh-file.js';

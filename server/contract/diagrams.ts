@@ -155,6 +155,10 @@ export const editOperationSchema = z.discriminatedUnion('type', [
   z.object({ type: z.literal('remove-basepoint'), basepoint: basepointRefSchema }),
   /** Laplacian smoothing of positions (topology and curves unchanged). */
   z.object({ type: z.literal('smooth'), iterations: small(1, 50).default(5) }),
+  /** Curve smoothing within the surface: curve vertices move for nicer pictures, topology unchanged. */
+  z.object({ type: z.literal('smooth-curves'), iterations: small(1, 100).default(10) }),
+  /** Isotopy clean-up: push the beta arc of an empty bigon region (0-based region id) across its alpha arc. */
+  z.object({ type: z.literal('remove-bigon'), region: index0 }),
 ]);
 export type EditOperation = z.infer<typeof editOperationSchema>;
 export type EditOperationType = EditOperation['type'];

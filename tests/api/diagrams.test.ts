@@ -217,6 +217,29 @@ describe('domains', () => {
     const res = await team.viewer.agent.post(DIAGRAM_PATHS.domainCheck(id, 1)).send({ coefficients: { 999: 1 } });
     expect(res.status).toBe(400);
   });
+  it('removes the empty bigon as an edit: alpha and beta become disjoint, which is not weakly admissible (Ozsváth–Szabó 2004)', async () => {
+    const bigon = result.regions.find((r) => r.corners === 2 && r.chi === 1 && r.basepoints.length === 0)!;
+    const res = await team.editor.agent.post(DIAGRAM_PATHS.edits(id)).send({ baseRevision: 1, operation: { type: 'remove-bigon', region: bigon.id } });
+    expect(res.status).toBe(201);
+    const a = await waitForAnalysis(team.viewer.agent, id, 2);
+    expect(a.result?.intersections).toHaveLength(0);
+    expect(a.result?.floer?.weaklyAdmissible).toBe(false);
+  });
+
+  it('refuses to remove a region that is not an empty bigon, with the reason (422)', async () => {
+    const annulus = result.regions.find((r) => r.basepoints.length > 0)!;
+    const res = await team.editor.agent.post(DIAGRAM_PATHS.edits(id)).send({ baseRevision: 2, operation: { type: 'remove-bigon', region: annulus.id } });
+    expect(res.status).toBe(422);
+    expect(res.body.error.code).toBe('invalid_operation');
+  });
+
+  it('smooths the curves as a new revision with the same invariants (common practice: curve smoothing is an isotopy)', async () => {
+    const d = await createFromTemplate(team.editor.agent, team.workspace.id, { kind: 'lens', p: 3, q: 1 });
+    await team.editor.agent.post(DIAGRAM_PATHS.edits(d.id)).send({ baseRevision: 1, operation: { type: 'smooth-curves', iterations: 5 } }).expect(201);
+    const a = await waitForAnalysis(team.viewer.agent, d.id, 2);
+    expect(a.result?.floer?.h1).toBe('Z/3'); // Ozsváth–Szabó 2004: H_1(L(3,1)) = Z/3
+    expect(a.result?.intersections).toHaveLength(3);
+  });
 });
 
 describe('library housekeeping', () => {

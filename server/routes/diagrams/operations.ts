@@ -3,8 +3,8 @@
  * diagram (the input is untouched) or the geometry's problems in words.
  */
 import {
-  addBasepoint, buildTriMesh, deleteCurve, dehnTwist, drawCurve, fingerMove, moveBasepoint, nearestCorner,
-  removeBasepoint, renameCurve, shortestPath, subdivideDiagram, fail, ok,
+  addBasepoint, deleteCurve, dehnTwist, drawCurve, fingerMove, moveBasepoint, nearestCorner, removeBasepoint,
+  removeBigon, renameCurve, shortestPath, smoothCurves, subdivideDiagram, taubinSmooth, fail, ok,
   type HeegaardDiagram, type Result,
 } from '../../../geometry/index.js';
 import type { BasepointRef, CurveRef, EditOperation, SurfacePoint } from '../../contract/diagrams.js';
@@ -38,40 +38,6 @@ function fingerPath(d: HeegaardDiagram, points: SurfacePoint[]): number[] | stri
     path.push(...seg.slice(1));
   }
   return path.length >= 2 ? path : 'pick a path of at least two distinct points';
-}
-
-/**
- * Taubin λ|μ smoothing (Taubin 1995, "A signal processing approach to fair surface design"): alternating
- * uniform Laplacian steps with λ = 0.5 and μ = −0.53 keep the volume from shrinking. Topology, curves and
- * basepoints unchanged. O(iterations · F).
- */
-function smooth(d: HeegaardDiagram, iterations: number): Result<HeegaardDiagram> {
-  const m = d.mesh, nV = m.nV, nF = m.nF;
-  let pos = Float64Array.from(m.pos.subarray(0, 3 * nV));
-  const sum = new Float64Array(3 * nV), deg = new Float64Array(nV);
-  const step = (factor: number) => {
-    sum.fill(0);
-    deg.fill(0);
-    for (let h = 0; h < 3 * nF; h++) {
-      const a = m.heVert[h], b = m.heVert[h % 3 === 2 ? h - 2 : h + 1];
-      for (let k = 0; k < 3; k++) sum[3 * a + k] += pos[3 * b + k];
-      deg[a]++;
-    }
-    const out = new Float64Array(3 * nV);
-    for (let v = 0; v < nV; v++) {
-      for (let k = 0; k < 3; k++) {
-        const p = pos[3 * v + k];
-        out[3 * v + k] = deg[v] > 0 ? p + factor * (sum[3 * v + k] / deg[v] - p) : p;
-      }
-    }
-    pos = out;
-  };
-  for (let i = 0; i < iterations; i++) {
-    step(0.5);
-    step(-0.53);
-  }
-  const { mesh } = buildTriMesh(pos, m.heVert.subarray(0, 3 * nF));
-  return ok({ ...d, mesh });
 }
 
 /** Applies one edit operation. */
@@ -121,7 +87,11 @@ export function applyOperation(d: HeegaardDiagram, op: EditOperation): Result<He
       return typeof b === 'string' ? refuse(b) : removeBasepoint(d, b);
     }
     case 'smooth':
-      return smooth(d, op.iterations);
+      return ok({ ...d, mesh: taubinSmooth(d.mesh, op.iterations) });
+    case 'smooth-curves':
+      return smoothCurves(d, { iterations: op.iterations });
+    case 'remove-bigon':
+      return removeBigon(d, op.region);
   }
 }
 
@@ -138,5 +108,7 @@ export function describeOperation(op: EditOperation): string {
     case 'move-basepoint': return `Moved ${op.basepoint.kind}_${op.basepoint.index + 1}`;
     case 'remove-basepoint': return `Removed ${op.basepoint.kind}_${op.basepoint.index + 1}`;
     case 'smooth': return `Smoothed the surface (${op.iterations} passes)`;
+    case 'smooth-curves': return `Smoothed the curves (${op.iterations} passes)`;
+    case 'remove-bigon': return `Removed the empty bigon R_${op.region + 1}`;
   }
 }

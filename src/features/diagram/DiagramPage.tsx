@@ -337,6 +337,7 @@ export default function DiagramPage() {
               <EditPanel
                 curves={mesh.data?.curves.map((c) => ({ family: c.family, index: c.index })) ?? []}
                 basepoints={mesh.data?.basepoints.map((b) => ({ kind: b.kind, index: b.index })) ?? []}
+                emptyBigons={result?.regions.filter((r) => r.corners === 2 && r.chi === 1 && r.basepoints.length === 0).map((r) => r.id) ?? []}
                 isHead={isHead} busy={edit.isPending} draw={draw} onDraw={setDraw} onApply={applyEdit}
               />
             ) : !result ? (

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import type { BasepointRef, CurveRef, EditOperationInput, SurfacePoint } from '../../../../server/contract/index.js';
 import type { Vec3 } from '../../../viewer/types';
 import { Button, SelectField } from '../../../lib/ui';
-import { curveLabel } from '../format';
+import { curveLabel, regionLabel } from '../format';
 
 /** Points picked on the surface for a new curve, a finger move, or where a basepoint goes. */
 export interface DrawState {
@@ -20,6 +20,8 @@ export interface DrawState {
 export interface EditPanelProps {
   curves: CurveRef[];
   basepoints: BasepointRef[];
+  /** Region ids of the bigons holding no basepoint (candidates for isotopy clean-up). */
+  emptyBigons: number[];
   isHead: boolean;
   busy: boolean;
   draw: DrawState | null;
@@ -53,7 +55,7 @@ function finishedEdit(draw: DrawState): [EditOperationInput, string] | null {
 }
 
 /** Drawing curves and the server's operations; each applied change becomes a new revision. */
-export function EditPanel({ curves, basepoints, isHead, busy, draw, onDraw, onApply }: EditPanelProps) {
+export function EditPanel({ curves, basepoints, emptyBigons, isHead, busy, draw, onDraw, onApply }: EditPanelProps) {
   const options = curves.map((c) => ({ value: refKey(c), label: curveLabel(c.family, c.index) }));
   const [family, setFamily] = useState<'alpha' | 'beta'>('alpha');
   const [twistCurve, setTwistCurve] = useState(options.find((o) => o.value.startsWith('beta'))?.value ?? options[0]?.value ?? '');
@@ -67,6 +69,8 @@ export function EditPanel({ curves, basepoints, isHead, busy, draw, onDraw, onAp
   const [bpToChange, setBpToChange] = useState(bpOptions[0]?.value ?? '');
   const bpRef = (k: string): BasepointRef => { const [kd, i] = k.split(':'); return { kind: kd as 'z' | 'w', index: Number(i) }; };
   const finished = draw ? finishedEdit(draw) : null;
+  const [bigonChoice, setBigon] = useState('');
+  const bigon = bigonChoice !== '' && emptyBigons.includes(Number(bigonChoice)) ? bigonChoice : String(emptyBigons[0] ?? '');
 
   if (!isHead) {
     return <p className="text-sm text-ink-muted">You are viewing an older revision. Edits apply to the latest revision; restore this one from History to continue from it.</p>;
@@ -171,12 +175,27 @@ export function EditPanel({ curves, basepoints, isHead, busy, draw, onDraw, onAp
         )}
       </section>
 
+      {emptyBigons.length > 0 && (
+        <section aria-labelledby="bigon-title" className="flex flex-col gap-2">
+          <h3 id="bigon-title" className="font-semibold">Isotopy clean-up</h3>
+          <div className="flex items-end gap-2">
+            <SelectField label="Empty bigon" value={bigon} onChange={(e) => setBigon(e.target.value)}
+              options={emptyBigons.map((r) => ({ value: String(r), label: regionLabel(r) }))} />
+            <Button variant="secondary" size="sm" disabled={busy || drawing || bigon === ''}
+              onClick={() => onApply({ type: 'remove-bigon', region: Number(bigon) }, `Removed the empty bigon ${regionLabel(Number(bigon))}`)}>
+              Remove the bigon
+            </Button>
+          </div>
+        </section>
+      )}
+
       <section aria-labelledby="subdivide-title" className="flex flex-col gap-2">
         <h3 id="subdivide-title" className="font-semibold">Refine the mesh</h3>
         <div className="flex flex-wrap gap-2">
           <Button variant="secondary" disabled={busy || drawing} onClick={() => onApply({ type: 'subdivide', method: 'midpoint' }, 'Midpoint subdivision')}>Midpoint subdivision</Button>
           <Button variant="secondary" disabled={busy || drawing} onClick={() => onApply({ type: 'subdivide', method: 'loop' }, 'Loop subdivision')}>Loop subdivision</Button>
-          <Button variant="secondary" disabled={busy || drawing} onClick={() => onApply({ type: 'smooth', iterations: 5 }, 'Smoothed positions')}>Smooth</Button>
+          <Button variant="secondary" disabled={busy || drawing} onClick={() => onApply({ type: 'smooth', iterations: 5 }, 'Smoothed the surface')}>Smooth the surface</Button>
+          <Button variant="secondary" disabled={busy || drawing} onClick={() => onApply({ type: 'smooth-curves', iterations: 10 }, 'Smoothed the curves')}>Smooth the curves</Button>
         </div>
       </section>
     </div>

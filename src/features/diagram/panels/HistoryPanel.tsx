@@ -1,6 +1,6 @@
 import type { Revision, RevisionOperation } from '../../../../server/contract/index.js';
 import { Button } from '../../../lib/ui';
-import { curveLabel, dateText } from '../format';
+import { curveLabel, dateText, regionLabel } from '../format';
 
 /** A sentence for what produced a revision. */
 export function describeOperation(op: RevisionOperation): string {
@@ -18,7 +18,9 @@ export function describeOperation(op: RevisionOperation): string {
     case 'add-basepoint': return `Added a basepoint ${op.kind}`;
     case 'move-basepoint': return 'Moved a basepoint';
     case 'remove-basepoint': return 'Removed a basepoint';
-    case 'smooth': return `Smoothed (${op.iterations ?? 5} steps)`;
+    case 'smooth': return `Smoothed the surface (${op.iterations ?? 5} steps)`;
+    case 'smooth-curves': return `Smoothed the curves (${op.iterations ?? 10} steps)`;
+    case 'remove-bigon': return `Removed the empty bigon ${regionLabel(op.region)}`;
   }
 }
 
