@@ -187,6 +187,7 @@ describe('the lab in a browser', () => {
     const id = diagramIdOf(s.page);
     await s.page.getByRole('tab', { name: 'Draw & edit' }).click();
     await s.page.getByLabel('Basepoint kind').selectOption('w');
+    await s.screenshot('lab-edit-panel');
     await s.page.getByRole('button', { name: 'Place a basepoint' }).click();
     const before = await analysisRegions(s.page, id, 4);
     const empty = before.find((r) => r.basepoints.length === 0)!;
