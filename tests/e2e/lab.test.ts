@@ -225,6 +225,14 @@ describe('the lab in a browser', () => {
     // Lipshitz 2006: a bigon has e = 1/2, n_x = n_y = 1/4, so μ = 1.
     await expect.poll(() => s.page.getByTestId('maslov-index').textContent(), { timeout: 20_000 }).toBe('1');
     expect(await s.page.getByTestId('domain-status').textContent()).toContain('This is a domain.');
+    // Naming the wrong start generator: the boundary of this bigon leaves x1, so "from x2" is refused
+    // (Ozsváth–Szabó 2004: ∂(∂D ∩ α) = y − x), and clearing the field lets the boundary decide again.
+    const start = await s.page.getByTestId('domain-x').textContent();
+    const wrong = start?.includes('x₁') ? 'x2' : 'x1';
+    await s.page.getByLabel('x (start)').fill(wrong);
+    await expect.poll(() => s.page.getByTestId('domain-status').textContent(), { timeout: 20_000 }).toContain('Not a domain.');
+    await s.page.getByLabel('x (start)').fill('');
+    await expect.poll(() => s.page.getByTestId('domain-status').textContent(), { timeout: 20_000 }).toContain('This is a domain.');
     await s.page.mouse.move(point!.x, point!.y);
     await s.page.waitForTimeout(400);
     await s.screenshot('lab-s1xs2-bigon-domain');

@@ -350,7 +350,7 @@ export default function DiagramPage() {
             ) : tab === 'generators' ? (
               <GeneratorsPanel diagramId={diagramId} revision={rev!} listed={Boolean(floer)} total={floer?.generatorCount ?? null} onShow={setGenerator} shown={generator} />
             ) : tab === 'domains' ? (
-              <DomainsPanel diagramId={diagramId} revision={rev!} regions={result.regions} domain={domain} onChange={setDomain} canEdit={canEdit}
+              <DomainsPanel diagramId={diagramId} revision={rev!} pointCount={result.intersections.length} regions={result.regions} domain={domain} onChange={setDomain} canEdit={canEdit}
                 hover={hover} selected={selected} onHover={setHover} />
             ) : (
               <HomologyPanel floer={floer} unavailable={result.floerUnavailable}

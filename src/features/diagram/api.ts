@@ -98,12 +98,12 @@ export function normalizeCoefficients(c: Record<number, number>): DomainCoeffici
 }
 
 /** Live domain check; the server answers e, n_x, n_y, μ and whether the boundary fits a pair of generators. */
-export function useDomainCheck(id: string, rev: number | null, coefficients: DomainCoefficients) {
-  const key = JSON.stringify(coefficients);
+export function useDomainCheck(id: string, rev: number | null, coefficients: DomainCoefficients, ends: { from?: number[]; to?: number[] } = {}) {
+  const key = JSON.stringify([coefficients, ends.from ?? null, ends.to ?? null]);
   return useQuery({
     queryKey: diagramKeys.domainCheck(id, rev ?? 0, key),
-    queryFn: () => apiFetch<DomainCheckResponse>(DIAGRAM_PATHS.domainCheck(id, rev!), { method: 'POST', body: { coefficients } }),
-    enabled: rev !== null && key !== '{}',
+    queryFn: () => apiFetch<DomainCheckResponse>(DIAGRAM_PATHS.domainCheck(id, rev!), { method: 'POST', body: { coefficients, ...ends } }),
+    enabled: rev !== null && Object.keys(coefficients).length > 0,
     placeholderData: keepPreviousData,
     staleTime: Infinity,
   });

@@ -58,3 +58,20 @@ export const generatorText = (ids: readonly number[] | null | undefined) => (ids
 
 const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 export const dateText = (iso: string) => dateFormat.format(new Date(iso));
+
+/**
+ * Intersection points typed as "x1, x4" (or "x₁ x₄", or "1 4") → 0-based point ids; undefined when empty,
+ * a message when a name is not a point of this diagram.
+ */
+export function parsePointList(text: string, pointCount: number): number[] | undefined | string {
+  const plain = text.replace(/[₀-₉]/g, (c) => String(SUB.indexOf(c))).trim();
+  if (!plain) return undefined;
+  const ids: number[] = [];
+  for (const word of plain.split(/[\s,;{}]+/).filter(Boolean)) {
+    const m = /^x?_?(\d+)$/i.exec(word);
+    const n = m ? Number(m[1]) : NaN;
+    if (!(n >= 1 && n <= pointCount)) return `“${word}” is not an intersection point here (x1 … x${pointCount}).`;
+    ids.push(n - 1);
+  }
+  return ids;
+}

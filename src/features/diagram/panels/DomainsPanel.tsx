@@ -3,7 +3,7 @@ import type { DomainCheckResponse, Region } from '../../../../server/contract/in
 import { errorMessage } from '../../../lib/api';
 import { Button, Spinner, TextField } from '../../../lib/ui';
 import { normalizeCoefficients, useDeleteDomain, useDomainCheck, useSaveDomain, useSavedDomains } from '../api';
-import { basepointNames, dateText, generatorText, rationalTex, rationalText, regionLabel } from '../format';
+import { basepointNames, dateText, generatorText, parsePointList, rationalTex, rationalText, regionLabel } from '../format';
 import { Tex } from '../Tex';
 import { rowClass, type Focus } from './shared';
 
@@ -11,6 +11,8 @@ export interface DomainsPanelProps {
   diagramId: string;
   revision: number;
   regions: Region[];
+  /** Number of intersection points (named x1 … xN). */
+  pointCount: number;
   domain: Record<number, number>;
   onChange: (next: Record<number, number>) => void;
   canEdit: boolean;
@@ -63,7 +65,11 @@ function CheckReport({ check }: { check: DomainCheckResponse }) {
 export function DomainsPanel(p: DomainsPanelProps) {
   const coefficients = normalizeCoefficients(p.domain);
   const empty = Object.keys(coefficients).length === 0;
-  const check = useDomainCheck(p.diagramId, p.revision, coefficients);
+  const [fromText, setFromText] = useState('');
+  const [toText, setToText] = useState('');
+  const from = parsePointList(fromText, p.pointCount), to = parsePointList(toText, p.pointCount);
+  const ends = { ...(Array.isArray(from) ? { from } : {}), ...(Array.isArray(to) ? { to } : {}) };
+  const check = useDomainCheck(p.diagramId, p.revision, coefficients, ends);
   const saved = useSavedDomains(p.diagramId);
   const save = useSaveDomain(p.diagramId);
   const remove = useDeleteDomain(p.diagramId);
@@ -106,6 +112,16 @@ export function DomainsPanel(p: DomainsPanelProps) {
       <div className="flex gap-2">
         <Button size="sm" variant="secondary" onClick={() => p.onChange({})} disabled={empty}>Clear</Button>
       </div>
+
+      <fieldset className="grid grid-cols-2 gap-2">
+        <legend className="mb-1 text-xs text-ink-muted">
+          Generators, optional: needed when the boundary does not fix them (a periodic domain goes from x to x).
+        </legend>
+        <TextField label="x (start)" placeholder="e.g. x1, x4" value={fromText} onChange={(e) => setFromText(e.target.value)}
+          error={typeof from === 'string' ? from : null} />
+        <TextField label="y (end)" placeholder="e.g. x2, x4" value={toText} onChange={(e) => setToText(e.target.value)}
+          error={typeof to === 'string' ? to : null} />
+      </fieldset>
 
       <section aria-labelledby="check-title" aria-live="polite" className="rounded-md border border-line p-3">
         <h3 id="check-title" className="mb-2 flex items-center gap-2 font-semibold">
