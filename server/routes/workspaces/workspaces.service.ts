@@ -95,27 +95,29 @@ async function ownerCount(tx: Tx, workspaceId: string): Promise<number> {
   return Number(r.rows[0]?.n ?? 0);
 }
 
+/**
+ * Inside a transaction: locks the workspace's memberships, finds the member (404 when absent) and refuses,
+ * with 409, a change that would leave the workspace without an owner (`staysOwner` false for the member).
+ */
+async function guardOwnerChange(tx: Tx, workspaceId: string, userId: string, staysOwner: boolean): Promise<void> {
+  const owners = await ownerCount(tx, workspaceId);
+  const [current] = await tx
+    .select({ role: memberships.role })
+    .from(memberships)
+    .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
+  if (!current) throw new HttpError('not_found', 'Member not found.');
+  if (current.role === 'owner' && !staysOwner && owners <= 1) {
+    throw new HttpError('conflict', 'A workspace needs at least one owner; make someone else owner first.');
+  }
+}
+
 /** Change a member's role; demoting the last owner → 409 conflict; non-member → 404. */
 export async function setMemberRole(db: Db, workspaceId: string, userId: string, role: Role): Promise<Member> {
   return db.transaction(async (tx) => {
-    const owners = await ownerCount(tx, workspaceId);
-    const [current] = await tx
-      .select({ role: memberships.role })
-      .from(memberships)
-      .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
-    if (!current) throw new HttpError('not_found', 'Member not found.');
-    if (current.role === 'owner' && role !== 'owner' && owners <= 1) {
-      throw new HttpError('conflict', 'A workspace needs at least one owner; make someone else owner first.');
-    }
-    await tx
-      .update(memberships)
-      .set({ role })
-      .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
-    const [row] = await tx
-      .select(memberColumns)
-      .from(memberships)
-      .innerJoin(users, eq(users.id, memberships.userId))
-      .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
+    await guardOwnerChange(tx, workspaceId, userId, role === 'owner');
+    const member = and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId));
+    await tx.update(memberships).set({ role }).where(member);
+    const [row] = await tx.select(memberColumns).from(memberships).innerJoin(users, eq(users.id, memberships.userId)).where(member);
     return toMember(row);
   });
 }
@@ -123,15 +125,7 @@ export async function setMemberRole(db: Db, workspaceId: string, userId: string,
 /** Remove a member; removing the last owner → 409 conflict; non-member → 404. */
 export async function removeMember(db: Db, workspaceId: string, userId: string): Promise<void> {
   await db.transaction(async (tx) => {
-    const owners = await ownerCount(tx, workspaceId);
-    const [current] = await tx
-      .select({ role: memberships.role })
-      .from(memberships)
-      .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
-    if (!current) throw new HttpError('not_found', 'Member not found.');
-    if (current.role === 'owner' && owners <= 1) {
-      throw new HttpError('conflict', 'A workspace needs at least one owner; make someone else owner first.');
-    }
+    await guardOwnerChange(tx, workspaceId, userId, false);
     await tx.delete(memberships).where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
   });
 }
