@@ -279,6 +279,7 @@ describe('the lab in a browser', () => {
   it('duplicates, renames and deletes a diagram, and Undo brings it back', async () => {
     await openLibrary(s, libraryUrl);
     const rows = s.page.getByTestId('diagram-row');
+    await rows.first().waitFor(); // the list loads after the heading; count only once it is there
     const before = await rows.count();
     const l52 = rows.filter({ has: s.page.getByRole('link', { name: 'L(5,2)', exact: true }) }).first();
     await l52.getByRole('button', { name: 'Duplicate L(5,2)' }).click();
